@@ -1,0 +1,30 @@
+/**
+ * engine: pure numerics, model in, results out. Runs in node (CLI, tests) and in a Web Worker.
+ * Public API: analyzeProject and the result types.
+ * Must not import: react, three, zustand, editor, viewer, ui, window/document.
+ */
+export { analyzeProject } from './analyze'
+export type {
+  AnalysisOptions,
+  AnalysisResult,
+  AnalysisStatus,
+  AssembledElement,
+  CheckRow,
+  CriterionEvaluation,
+  FloorCentres,
+  FloorProps,
+  Issue,
+  IssueCode,
+  ModalResult,
+  ModeCharacter,
+  Severity,
+  SpectrumFloorResponse,
+  SpectrumResult,
+  StaticCaseId,
+  StaticLoadCase,
+  StaticTorsionResult,
+  StoryTorsionRow,
+  Structure,
+  TimeHistoryResult,
+  Verdict,
+} from './results'

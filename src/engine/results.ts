@@ -1,0 +1,323 @@
+/**
+ * Result types of the engine: plain, serializable objects (Float64Array allowed) that a Web Worker can
+ * post. All values SI (m, kg, N, s, rad) unless a name says otherwise. Displacement vectors are in the
+ * global DOF order [u_x1, u_y1, theta_1, u_x2, ...] at the plan origin O.
+ *
+ * Ownership while the engine is being built: the "structure/modal/centres" sections belong to the
+ * mechanics work, the "torsion/spectrum/time history/criteria" sections to the loads work.
+ */
+import type { Point, SpectrumSpec } from '@/model'
+
+// ---------------------------------------------------------------- issues
+
+export type Severity = 'error' | 'warning' | 'info'
+
+/** Machine-readable problem codes; the message says the same in words. */
+export type IssueCode =
+  | 'invalid-model'
+  | 'mechanism'
+  | 'ill-conditioned'
+  | 'no-mass'
+  | 'no-floors'
+  | 'zero-length'
+  | 'degenerate-slab'
+  | 'element-outside-floors'
+  | 'unsupported-element'
+  | 'eigen-incomplete'
+  | 'criterion-unknown'
+  | 'not-applicable'
+
+/** A user-model problem (never an exception). `refs` are ids to highlight (elements, floors). */
+export interface Issue {
+  readonly code: IssueCode
+  readonly severity: Severity
+  readonly message: string
+  readonly refs: readonly string[]
+  /** Floor id the issue is about, when there is one. */
+  readonly floor?: string
+  /** For mechanisms: the free direction ('x', 'y', 'rotation' or a plan direction in words). */
+  readonly direction?: string
+}
+
+// ---------------------------------------------------------------- structure (mechanics)
+
+/** Mass and geometry of one floor (rigid diaphragm). */
+export interface FloorProps {
+  readonly id: string
+  readonly name: string
+  /** 0-based index, bottom first (floor number = index + 1). */
+  readonly index: number
+  /** z of the floor, m. */
+  readonly elevation: number
+  /** height of the story below, m. */
+  readonly height: number
+  /** kg */
+  readonly mass: number
+  /** m */
+  readonly centreOfMass: Point
+  /** Polar mass moment about the centre of mass J, kg·m². */
+  readonly polarInertia: number
+  /** l_s = sqrt(J/m), m. */
+  readonly radiusOfGyration: number
+  /** Net slab area (outlines minus openings), m². */
+  readonly slabArea: number
+  /** Bounding box of the outer outline vertices, m. */
+  readonly extent: { readonly minX: number; readonly maxX: number; readonly minY: number; readonly maxY: number }
+  /** Vertices of the outer slab outlines (not openings): the extreme points for drift checks. */
+  readonly extremePoints: readonly Point[]
+}
+
+/** One lateral element as assembled: its map rows and lateral stiffness over the floors it connects. */
+export interface AssembledElement {
+  readonly id: string
+  readonly kind: 'wall' | 'frameLine' | 'columnX' | 'columnY'
+  /** Floor indices (0-based) the element connects, bottom first; a floor it stands on comes first. */
+  readonly floors: readonly number[]
+  /** Row a = [d_x, d_y, x*d_y - y*d_x] (same for every floor). */
+  readonly map: readonly [number, number, number]
+  /** Whether the element's lowest entry in `floors` is its support floor (moves with that floor). */
+  readonly standsOnFloor: boolean
+  /** Lateral stiffness over `floors`, row-major n_e x n_e, N/m. */
+  readonly stiffness: Float64Array
+  /** True for shear-type (tridiagonal story) elements: frame lines and columns. */
+  readonly isShearType: boolean
+}
+
+/** Assembled global matrices and floor data. */
+export interface Structure {
+  readonly floorCount: number
+  readonly dofCount: number
+  readonly floors: readonly FloorProps[]
+  /** Global stiffness K, row-major dofCount², N/m, N, N·m/rad. Symmetric by construction. */
+  readonly stiffness: Float64Array
+  /** Global mass M, row-major dofCount², kg, kg·m, kg·m². Block diagonal 3x3 per floor. */
+  readonly mass: Float64Array
+  readonly elements: readonly AssembledElement[]
+  /** True when every element is shear type (story centres of stiffness are then defined). */
+  readonly allShearType: boolean
+  /** Overall centre of mass of the building (X_c, Y_c), m. */
+  readonly buildingCentreOfMass: Point
+  readonly totalMass: number
+}
+
+// ---------------------------------------------------------------- modal (mechanics)
+
+/** Plain-words class of a mode. */
+export type ModeCharacter = 'x' | 'y' | 'torsion' | 'coupled'
+
+/** Modal analysis results; per-mode arrays have length `count`. */
+export interface ModalResult {
+  readonly count: number
+  readonly dofCount: number
+  /** omega, rad/s, ascending. */
+  readonly angularFrequencies: Float64Array
+  /** s */
+  readonly periods: Float64Array
+  /** Hz */
+  readonly frequenciesHz: Float64Array
+  /** Mass-normalized shapes at O, mode-major: shapes[m * dofCount + i]; sign: largest |component| positive. */
+  readonly shapes: Float64Array
+  /** Participation factors Gamma = phi' M r for r = X, Y and the rotation about the building CM. */
+  readonly participation: { readonly x: Float64Array; readonly y: Float64Array; readonly rz: Float64Array }
+  /** (phi' M r)² / (r' M r), -. */
+  readonly effectiveMassRatio: { readonly x: Float64Array; readonly y: Float64Array; readonly rz: Float64Array }
+  readonly cumulativeMassRatio: { readonly x: Float64Array; readonly y: Float64Array; readonly rz: Float64Array }
+  /** Share of kinetic energy in rotation about each floor's centre of mass, 0..1. */
+  readonly torsionShare: Float64Array
+  readonly character: readonly ModeCharacter[]
+  /** Which solver produced the modes and whether all were found. */
+  readonly solver: string
+  readonly complete: boolean
+}
+
+// ---------------------------------------------------------------- centres (mechanics)
+
+/** Centres and torsional properties of one floor. */
+export interface FloorCentres {
+  readonly floorId: string
+  readonly centreOfMass: Point
+  /** Floor-load definition: a force on this floor alone through this point turns it by zero. */
+  readonly centreOfRigidity: Point
+  /** Classic story centre of stiffness, only when all elements are shear type. */
+  readonly storyCentreOfStiffness: Point | null
+  /** CR minus CM, m. */
+  readonly eccentricity: { readonly x: number; readonly y: number }
+  /** K_theta,CR = 1/F[theta,theta], N·m/rad. */
+  readonly torsionalStiffness: number
+  /** Diagonal terms of inv(F_j): K[u_x,u_x], K[u_y,u_y], N/m. */
+  readonly lateralStiffness: { readonly x: number; readonly y: number }
+  /** r_x = sqrt(K_theta / K_yy), r_y = sqrt(K_theta / K_xx), m. */
+  readonly torsionalRadius: { readonly x: number; readonly y: number }
+  /** l_s = sqrt(J/m), m. */
+  readonly radiusOfGyration: number
+  /** True when inclined elements couple x and y noticeably (radii then use diagonal terms only). */
+  readonly hasXYCoupling: boolean
+}
+
+// ---------------------------------------------------------------- criteria (loads)
+
+export type Verdict = 'pass' | 'fail' | 'not-applicable'
+
+/** One check row of a criterion set. */
+export interface CheckRow {
+  readonly floorId: string
+  /** Load case id or analysis direction ('x' / 'y'). */
+  readonly caseId: string
+  /** What is checked, in words, e.g. 'max/avg story drift'. */
+  readonly quantity: string
+  readonly value: number
+  readonly limit: number
+  readonly verdict: Verdict
+  /** Clause of the source this row follows. */
+  readonly clause: string
+  /** Short classification, e.g. 'Type 1a', 'regular', 'torsionally flexible'. */
+  readonly label: string
+}
+
+/** A criterion set evaluated on a model. Carries the caution. */
+export interface CriterionEvaluation {
+  readonly setId: string
+  readonly setName: string
+  readonly source: string
+  readonly rows: readonly CheckRow[]
+  readonly overall: Verdict
+  readonly caution: string
+}
+
+// ---------------------------------------------------------------- static torsion (loads)
+
+export type StaticCaseId = 'X+e' | 'X-e' | 'Y+e' | 'Y-e'
+
+/** Drift and displacement ratios of one story in one static case. */
+export interface StoryTorsionRow {
+  readonly floorId: string
+  /** 0-based story index (story i lies below floor i). */
+  readonly index: number
+  /** Largest signed drift along the load at the extreme points, m. */
+  readonly driftMax: number
+  /** Mean of the drifts at the two ends across the load, m. */
+  readonly driftAvg: number
+  readonly driftRatio: number
+  /** Same for total floor displacements (used by amplification rules), m. */
+  readonly displacementMax: number
+  readonly displacementAvg: number
+  readonly displacementRatio: number
+  /** Amplification of accidental torsion where the criterion set defines one, else null. */
+  readonly amplification: number | null
+  /** Largest drift divided by the story height, -. */
+  readonly driftIndex: number
+}
+
+export interface StaticLoadCase {
+  readonly id: StaticCaseId
+  readonly direction: 'x' | 'y'
+  readonly eccentricitySign: 1 | -1
+  /** Floor forces along the load direction, N. */
+  readonly forces: Float64Array
+  /** Load point of each floor (CM moved by the accidental eccentricity), m. */
+  readonly loadPoints: readonly Point[]
+  /** Global displacement vector (3N) at O, m and rad. */
+  readonly displacements: Float64Array
+  readonly stories: readonly StoryTorsionRow[]
+}
+
+export interface StaticTorsionResult {
+  /** Period used for the vertical distribution in each direction, s. */
+  readonly periodUsed: { readonly x: number; readonly y: number }
+  /** Exponent k of the vertical distribution in each direction. */
+  readonly exponent: { readonly x: number; readonly y: number }
+  /** Base shear applied in each direction, N (ratios do not depend on it). */
+  readonly baseShear: { readonly x: number; readonly y: number }
+  readonly eccentricityFraction: number
+  readonly cases: readonly StaticLoadCase[]
+  readonly criterion: CriterionEvaluation
+}
+
+// ---------------------------------------------------------------- response spectrum (loads)
+
+/** Peak responses from one or both directions, combined over modes. */
+export interface SpectrumFloorResponse {
+  readonly floorId: string
+  /** Peak displacement at the CM along x and y, and rotation, m / rad (CQC). */
+  readonly displacementCqc: { readonly x: number; readonly y: number; readonly rotation: number }
+  readonly displacementSrss: { readonly x: number; readonly y: number; readonly rotation: number }
+  /** Largest story drift at the extreme points (formed per mode, then combined), m. */
+  readonly driftMaxCqc: { readonly x: number; readonly y: number }
+  readonly driftMaxSrss: { readonly x: number; readonly y: number }
+  /** Story shear below this floor, N (CQC). */
+  readonly storyShearCqc: { readonly x: number; readonly y: number }
+}
+
+export interface SpectrumResult {
+  readonly spectrum: SpectrumSpec
+  readonly damping: number
+  /** Spectral acceleration per mode, g. */
+  readonly modalSa: Float64Array
+  /** Base shear per excitation direction, CQC and SRSS, N. */
+  readonly baseShear: {
+    readonly x: { readonly cqc: number; readonly srss: number }
+    readonly y: { readonly cqc: number; readonly srss: number }
+  }
+  /** Scale factor applied to all results (1 unless base-shear scaling was asked for). */
+  readonly scale: number
+  /** Responses to excitation along X, along Y, and the two combined by the chosen direction rule. */
+  readonly excitationX: readonly SpectrumFloorResponse[]
+  readonly excitationY: readonly SpectrumFloorResponse[]
+  readonly combined: readonly SpectrumFloorResponse[]
+  readonly directionCombination: 'srss' | '100-30'
+}
+
+// ---------------------------------------------------------------- time history (loads)
+
+export interface TimeHistoryResult {
+  /** s */
+  readonly dt: number
+  readonly stepCount: number
+  readonly damping: number
+  /** Displacement history, step-major: u[s * dofCount + i], at O. */
+  readonly displacements: Float64Array
+  readonly dofCount: number
+  /** Peak |u_x|, |u_y| at each floor's CM and |theta|, m / rad. */
+  readonly peaks: readonly {
+    readonly floorId: string
+    readonly x: number
+    readonly y: number
+    readonly rotation: number
+  }[]
+  readonly groundMotionName: string
+}
+
+// ---------------------------------------------------------------- whole analysis
+
+export type AnalysisStatus = 'ok' | 'invalid' | 'mechanism'
+
+/** Options of `analyzeProject`. */
+export interface AnalysisOptions {
+  /** Run the response spectrum analysis (default true). */
+  readonly spectrum?: boolean
+  /** Run the time history (default false: it is the heaviest part). */
+  readonly timeHistory?: boolean
+  /** Criterion set id overriding the project's settings. */
+  readonly criterionSet?: string
+}
+
+/** Everything one analysis run produces. Sections are null when they could not be computed. */
+export interface AnalysisResult {
+  readonly status: AnalysisStatus
+  readonly issues: readonly Issue[]
+  readonly projectName: string
+  readonly floors: readonly FloorProps[]
+  readonly totalMass: number
+  readonly buildingCentreOfMass: Point | null
+  readonly modes: ModalResult | null
+  readonly centres: readonly FloorCentres[] | null
+  readonly torsion: StaticTorsionResult | null
+  readonly spectrum: SpectrumResult | null
+  readonly timeHistory: TimeHistoryResult | null
+  /** Criterion set evaluation of plan regularity (eccentricity / radius rules), if the set has any. */
+  readonly regularity: CriterionEvaluation | null
+  /** Always present: results are preliminary. */
+  readonly caution: string
+  /** Wall-clock milliseconds per stage (informative). */
+  readonly timings: Readonly<Record<string, number>>
+}

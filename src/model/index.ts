@@ -1,0 +1,43 @@
+/**
+ * model: what a Gyre project is (plain data, SI units) and pure helpers about it.
+ * Public API: types, ids, floor helpers, units, schema/parse, migrations, the caution text, the demo.
+ * Must not import: engine, editor, viewer, ui, react, three, ml-matrix.
+ */
+export type {
+  AnalysisSettings,
+  BaseRef,
+  Column,
+  ColumnFixity,
+  CriterionSetSpec,
+  Floor,
+  FrameLine,
+  FrameStiffness,
+  Grid,
+  GroundMotionSpec,
+  LineMass,
+  Material,
+  Point,
+  PointMass,
+  Project,
+  Slab,
+  SpectrumSpec,
+  Wall,
+  WallStoryOverride,
+} from './types'
+export type {
+  AnyId,
+  ColumnId,
+  FloorId,
+  FrameLineId,
+  LineMassId,
+  MaterialId,
+  PointMassId,
+  SlabId,
+  WallId,
+} from './ids'
+export { createId } from './ids'
+export { computeElevations, contentFloorId, elementFloorRange, floorContent, floorIndex } from './floors'
+export { CAUTION, CAUTION_SHORT } from './caution'
+export { CURRENT_VERSION, parseProject } from './schema'
+export type { ParseResult } from './schema'
+export type { UnitSystem } from './units'

@@ -1,0 +1,2 @@
+/** Unit systems for display and input; the model itself is always SI. */
+export type UnitSystem = 'SI' | 'US'

@@ -1,0 +1,14 @@
+import { defineConfig } from 'vitest/config'
+import { alias } from './vite.config'
+
+// Browser tests: playwright-core drives Debian's /usr/bin/chromium against the built app (dist/).
+export default defineConfig({
+  resolve: { alias },
+  test: {
+    environment: 'node',
+    include: ['test/browser/**/*.test.ts'],
+    testTimeout: 120000,
+    hookTimeout: 120000,
+    fileParallelism: false,
+  },
+})
