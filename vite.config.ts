@@ -2,7 +2,7 @@ import { fileURLToPath } from 'node:url'
 import react from '@vitejs/plugin-react'
 import { defineConfig } from 'vite'
 
-export const alias = { '@': fileURLToPath(new URL('./src', import.meta.url)) }
+const alias = { '@': fileURLToPath(new URL('./src', import.meta.url)) }
 
 export default defineConfig({
   plugins: [react()],

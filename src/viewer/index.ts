@@ -1,0 +1,6 @@
+/**
+ * viewer: three.js / @react-three/fiber view of the building and its modes and responses.
+ * Public API: ViewerPane. Must not import: ui.
+ */
+export { ViewerPane } from './ViewerPane'
+export type { ViewerPaneProps } from './ViewerPane'
