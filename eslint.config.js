@@ -77,7 +77,7 @@ export default tseslint.config(
     },
   },
   {
-    files: ['bench/**', 'test/**', '.ci/**', '*.config.*'],
+    files: ['bench/**', 'test/**', 'scripts/**', '.ci/**', '*.config.*'],
     rules: { 'no-console': 'off' },
   },
   {
