@@ -246,6 +246,11 @@ export interface CriterionSetSpec {
   readonly irregularRatio?: number
   /** Ratio above which it is extremely irregular (e.g. 1.4). */
   readonly extremeRatio?: number
+  /**
+   * What the two ratios above are taken on: story drifts (default) or total floor displacements at
+   * the extreme points (e.g. a displacement-based sensitivity ratio).
+   */
+  readonly ratioQuantity?: 'drift' | 'displacement'
   /** Amplification: Ax = (delta_max / (divisor * delta_avg))^power clamped to [min, max], on displacements. */
   readonly amplification?: {
     readonly divisor: number
