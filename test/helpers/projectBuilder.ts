@@ -194,7 +194,7 @@ export function projectBuilder(options: ProjectBuilderOptions = {}): ProjectBuil
         const id = o.id !== undefined && list.length === 1 ? o.id : nextId('s')
         slabs[id] = {
           id,
-          floor,
+          floor: floor as FloorId,
           outline: [...o.outline],
           openings: (o.openings ?? []).map((h) => [...h]),
           areaMass: o.areaMass,
@@ -260,7 +260,7 @@ export function projectBuilder(options: ProjectBuilderOptions = {}): ProjectBuil
         const id = o.id !== undefined && list.length === 1 ? o.id : nextId('pm')
         pointMasses[id] = {
           id,
-          floor,
+          floor: floor as FloorId,
           at: o.at,
           mass: o.mass,
           ...(o.polarInertia !== undefined ? { polarInertia: o.polarInertia } : {}),
@@ -272,7 +272,7 @@ export function projectBuilder(options: ProjectBuilderOptions = {}): ProjectBuil
       const list = targets(o.floor)
       for (const floor of list) {
         const id = o.id !== undefined && list.length === 1 ? o.id : nextId('lm')
-        lineMasses[id] = { id, floor, points: [...o.points], massPerLength: o.massPerLength } as LineMass
+        lineMasses[id] = { id, floor: floor as FloorId, points: [...o.points], massPerLength: o.massPerLength } as LineMass
       }
       return builder
     },
