@@ -198,7 +198,7 @@ export function projectBuilder(options: ProjectBuilderOptions = {}): ProjectBuil
           outline: [...o.outline],
           openings: (o.openings ?? []).map((h) => [...h]),
           areaMass: o.areaMass,
-        } as Slab
+        } as unknown as Slab
       }
       return builder
     },
@@ -272,7 +272,7 @@ export function projectBuilder(options: ProjectBuilderOptions = {}): ProjectBuil
       const list = targets(o.floor)
       for (const floor of list) {
         const id = o.id !== undefined && list.length === 1 ? o.id : nextId('lm')
-        lineMasses[id] = { id, floor: floor as FloorId, points: [...o.points], massPerLength: o.massPerLength } as LineMass
+        lineMasses[id] = { id, floor: floor as FloorId, points: [...o.points], massPerLength: o.massPerLength } as unknown as LineMass
       }
       return builder
     },
