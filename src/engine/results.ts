@@ -172,6 +172,8 @@ export interface CheckRow {
   readonly clause: string
   /** Short classification, e.g. 'Type 1a', 'regular', 'torsionally flexible'. */
   readonly label: string
+  /** How value and limit compare for a pass: '<=' (value at most limit) or '>='; absent: informative. */
+  readonly comparison?: '<=' | '>='
 }
 
 /** A criterion set evaluated on a model. Carries the caution. */
@@ -182,6 +184,8 @@ export interface CriterionEvaluation {
   readonly rows: readonly CheckRow[]
   readonly overall: Verdict
   readonly caution: string
+  /** Assumptions and limits of the set as implemented (shown with the rows). */
+  readonly notes?: readonly string[]
 }
 
 // ---------------------------------------------------------------- static torsion (loads)
@@ -229,6 +233,10 @@ export interface StaticTorsionResult {
   /** Base shear applied in each direction, N (ratios do not depend on it). */
   readonly baseShear: { readonly x: number; readonly y: number }
   readonly eccentricityFraction: number
+  /** Where the eccentricity fraction came from: the criterion set's own value or the settings. */
+  readonly eccentricitySource?: 'criterion-set' | 'settings'
+  /** Base-shear coefficient V / W in each direction, - (Sa(T) in g with R = 1). */
+  readonly baseShearCoefficient?: { readonly x: number; readonly y: number }
   readonly cases: readonly StaticLoadCase[]
   readonly criterion: CriterionEvaluation
 }
@@ -260,6 +268,14 @@ export interface SpectrumResult {
   }
   /** Scale factor applied to all results (1 unless base-shear scaling was asked for). */
   readonly scale: number
+  /** Scale factor per excitation direction (`scale` is the larger of the two). */
+  readonly scaleByDirection?: { readonly x: number; readonly y: number }
+  /** Number of modes combined. */
+  readonly modeCount?: number
+  /** CQC correlation matrix, row-major modeCount². */
+  readonly correlation?: Float64Array
+  /** Signed modal base shear along the excitation direction, per mode, N (before scaling). */
+  readonly modalBaseShear?: { readonly x: Float64Array; readonly y: Float64Array }
   /** Responses to excitation along X, along Y, and the two combined by the chosen direction rule. */
   readonly excitationX: readonly SpectrumFloorResponse[]
   readonly excitationY: readonly SpectrumFloorResponse[]
@@ -285,6 +301,16 @@ export interface TimeHistoryResult {
     readonly rotation: number
   }[]
   readonly groundMotionName: string
+  /** True for the generated demo motion (invented, not a recorded earthquake). */
+  readonly synthetic?: boolean
+  /** Integration step of the ground record, s (the stored series may be decimated). */
+  readonly integrationDt?: number
+  /** Every `outputStride`-th integration step is stored. */
+  readonly outputStride?: number
+  /** Ground acceleration at the stored steps, m/s². */
+  readonly groundAcceleration?: { readonly x: Float64Array; readonly y: Float64Array }
+  /** Peak |ground acceleration| per direction, m/s². */
+  readonly peakGroundAcceleration?: { readonly x: number; readonly y: number }
 }
 
 // ---------------------------------------------------------------- whole analysis
