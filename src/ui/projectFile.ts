@@ -1,0 +1,56 @@
+/** Reading and writing the project file at the browser edge. */
+import { parseProject } from '@/model'
+import type { Project } from '@/model'
+
+export type OpenResult =
+  | { readonly ok: true; readonly project: Project; readonly warnings: readonly string[] }
+  | { readonly ok: false; readonly errors: readonly string[] }
+
+/** Parse file text into a validated project, or the readable list of what is wrong with it. */
+export function readProjectText(text: string, fileName = 'file'): OpenResult {
+  let json: unknown
+  try {
+    json = JSON.parse(text)
+  } catch (err) {
+    const why = err instanceof Error ? err.message : String(err)
+    return { ok: false, errors: [`[file] ${fileName} is not valid JSON (${why})`] }
+  }
+  try {
+    const parsed = parseProject(json)
+    if (parsed.ok) return { ok: true, project: parsed.project, warnings: parsed.warnings }
+    return { ok: false, errors: parsed.errors.length ? parsed.errors : [`[file] ${fileName} was refused`] }
+  } catch (err) {
+    const why = err instanceof Error ? err.message : String(err)
+    return { ok: false, errors: [why.startsWith('[') ? why : `[file] ${why}`] }
+  }
+}
+
+/** The saved file's text: the document as it is (SI units), pretty-printed. */
+export function projectToText(project: Project): string {
+  return JSON.stringify(project, null, 2) + '\n'
+}
+
+/** A file name from the project name: lowercase, dashes, `.gyre.json`. */
+export function projectFileName(project: Project): string {
+  const slug = project.name
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-+|-+$/g, '')
+  return `${slug || 'project'}.gyre.json`
+}
+
+/** Start a download of the project as a .json file (Blob + temporary link). */
+export function downloadProject(project: Project): string {
+  const name = projectFileName(project)
+  const blob = new Blob([projectToText(project)], { type: 'application/json' })
+  const url = URL.createObjectURL(blob)
+  const link = document.createElement('a')
+  link.href = url
+  link.download = name
+  link.style.display = 'none'
+  document.body.appendChild(link)
+  link.click()
+  link.remove()
+  setTimeout(() => URL.revokeObjectURL(url), 1000)
+  return name
+}
