@@ -38,6 +38,33 @@ export type {
 export { createId } from './ids'
 export { computeElevations, contentFloorId, elementFloorRange, floorContent, floorIndex } from './floors'
 export { CAUTION, CAUTION_SHORT } from './caution'
-export { CURRENT_VERSION, parseProject } from './schema'
+export {
+  CURRENT_VERSION,
+  DEFAULT_SETTINGS,
+  LIMITS,
+  MAX_MESSAGES,
+  PROJECT_FORMAT,
+  parseProject,
+  parseProjectText,
+  serializeProject,
+} from './schema'
 export type { ParseResult } from './schema'
-export type { UnitSystem } from './units'
+export { MIGRATIONS, MigrationError, migrateDocument } from './migrations'
+export type { Migration, MigrationResult, RawDocument } from './migrations'
+export {
+  FOOT,
+  INCH,
+  KIP,
+  POUND_FORCE,
+  QUANTITIES,
+  STANDARD_GRAVITY,
+  UNIT_SYSTEMS,
+  formatNumber,
+  formatQuantity,
+  fromDisplay,
+  storageUnit,
+  toDisplay,
+  unitLabel,
+} from './units'
+export type { Quantity, UnitSystem } from './units'
+export { demoProject } from './demo'

@@ -1,0 +1,102 @@
+/**
+ * Node entry: `npm run analyze -- [model.json] [--json] [--time-history] [--criteria <id>] [--units SI|US]`.
+ * Reads a project file, validates it, runs the engine and prints a summary (or the full JSON result).
+ * Exit codes: 0 analysis completed, 1 invalid model or arguments, 2 mechanism, 3 internal error.
+ * Imports only model and engine: the living proof that both run without a browser.
+ * @see ../../docs/cli.md
+ */
+import { readFileSync } from 'node:fs'
+import { resolve } from 'node:path'
+import { fileURLToPath } from 'node:url'
+import { analyzeProject } from '@/engine'
+import type { AnalysisOptions } from '@/engine'
+import { CAUTION, parseProjectText } from '@/model'
+import { USAGE, parseArgs } from './args'
+import { formatIssue, formatResultJson, formatSummary } from './format'
+
+/** Where the CLI writes and how it reads files (injected so tests run in-process). */
+export interface CliIo {
+  readonly out: (text: string) => void
+  readonly err: (text: string) => void
+  readonly readFile: (path: string) => string
+}
+
+export const EXIT_OK = 0
+export const EXIT_INVALID = 1
+export const EXIT_MECHANISM = 2
+export const EXIT_INTERNAL = 3
+
+/** The demo building analyzed when no file is given. */
+export const DEFAULT_MODEL = fileURLToPath(new URL('../../public/examples/corner-block.json', import.meta.url))
+
+const nodeIo: CliIo = {
+  out: (text) => process.stdout.write(text),
+  err: (text) => process.stderr.write(text),
+  readFile: (path) => readFileSync(path, 'utf8'),
+}
+
+/** Run the CLI on argv (without node and the script) and return the exit code. Never throws. */
+export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
+  const args = parseArgs(argv)
+  if (!args.ok) {
+    io.err(`${args.error}\n${USAGE}\n`)
+    return EXIT_INVALID
+  }
+  const o = args.options
+  if (o.help) {
+    io.out(`${USAGE}\n`)
+    return EXIT_OK
+  }
+  const file = o.file ?? DEFAULT_MODEL
+  let text: string
+  try {
+    text = io.readFile(file)
+  } catch (error) {
+    io.err(`[file] cannot read ${file}: ${(error as Error).message}\n`)
+    return EXIT_INVALID
+  }
+  const parsed = parseProjectText(text)
+  if (!parsed.ok) {
+    io.err(`[file] ${file} is not a valid Gyre project (${parsed.errors.length} problem${parsed.errors.length === 1 ? '' : 's'}):\n`)
+    for (const e of parsed.errors) io.err(`${e}\n`)
+    return EXIT_INVALID
+  }
+  for (const w of parsed.warnings) io.err(`[file] warning: ${w}\n`)
+
+  const options: AnalysisOptions = {
+    timeHistory: o.timeHistory,
+    ...(o.criteria !== null ? { criterionSet: o.criteria } : {}),
+  }
+  let result
+  try {
+    result = analyzeProject(parsed.project, options)
+  } catch (error) {
+    io.err(`[cli] internal error while analyzing ${file}: ${(error as Error).message}\n${CAUTION}\n`)
+    return EXIT_INTERNAL
+  }
+
+  try {
+    io.out(o.json ? formatResultJson(result) : formatSummary(result, o.units))
+  } catch (error) {
+    io.err(`[cli] internal error while printing the result: ${(error as Error).message}\n`)
+    return EXIT_INTERNAL
+  }
+  if (result.status === 'mechanism') {
+    const mechanisms = result.issues.filter((i) => i.code === 'mechanism')
+    const list = mechanisms.length > 0 ? mechanisms : result.issues.filter((i) => i.severity === 'error')
+    io.err(`[engine] ${file}: the structure is a mechanism:\n`)
+    for (const i of list) io.err(`${formatIssue(i)}\n`)
+    return EXIT_MECHANISM
+  }
+  if (result.status === 'invalid') {
+    io.err(`[engine] ${file}: the model cannot be analyzed:\n`)
+    for (const i of result.issues.filter((x) => x.severity === 'error')) io.err(`${formatIssue(i)}\n`)
+    return EXIT_INVALID
+  }
+  return EXIT_OK
+}
+
+const entry = process.argv[1]
+if (entry !== undefined && resolve(entry) === fileURLToPath(import.meta.url)) {
+  process.exitCode = runCli(process.argv.slice(2))
+}
