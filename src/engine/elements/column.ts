@@ -1,0 +1,101 @@
+/**
+ * Column: two shear-type elements along its local axes; torsional stiffness ignored. Local x lies at
+ * `angle` counter-clockwise from global X; I_x (about local x) resists translation along local y,
+ * I_y resists translation along local x. Units: N, m, Pa, rad.
+ * @see MODELING.md §Lateral-resisting elements (axis convention), docs/mechanics.md §Columns
+ */
+import { elementFloorRange } from '@/model'
+import type { Column, ColumnFixity, Project } from '@/model'
+import { elementMapRow, extendWithSupportFloor } from '../dofs'
+import type { AssembledElement, Issue } from '../results'
+import { shearChainStiffness } from './frameLine'
+
+/**
+ * Story stiffness of a column, N/m: 12 E I f / h³ with both ends fixed against rotation, 3 E I f / h³
+ * with one end pinned (the other fixed); f the effective stiffness factor.
+ * @see common practice (flexural sway stiffness of a prismatic member; e.g. Gere & Timoshenko,
+ * Mechanics of Materials, from memory)
+ */
+export function columnStoryStiffness(
+  E: number,
+  I: number,
+  h: number,
+  fixity: ColumnFixity,
+  factor = 1,
+): number {
+  const c = fixity === 'fixed' ? 12 : 3
+  return (c * E * I * factor) / (h * h * h)
+}
+
+const positive = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v) && v > 0
+
+/**
+ * The two assembled-element records of a column: 'columnX' acts along local x
+ * (d = (cos a, sin a), uses I_y) and 'columnY' along local y (d = (-sin a, cos a), uses I_x).
+ */
+export function buildColumnElements(
+  project: Pick<Project, 'floors' | 'materials'>,
+  column: Column,
+): { elements: AssembledElement[]; issues: Issue[] } {
+  const fail = (code: Issue['code'], why: string): { elements: AssembledElement[]; issues: Issue[] } => ({
+    elements: [],
+    issues: [
+      {
+        code,
+        severity: 'warning',
+        message: `[engine] column ${column.id} (${column.name}): ${why}; it is left out of the analysis`,
+        refs: [column.id],
+      },
+    ],
+  })
+  const range = elementFloorRange(project, column)
+  if (!range) {
+    return fail(
+      'element-outside-floors',
+      `its floor range (base ${column.base}, top ${column.top}) is empty or names an unknown floor`,
+    )
+  }
+  const material = project.materials[column.material]
+  if (!material) return fail('invalid-model', `material "${column.material}" does not exist`)
+  if (!positive(material.E)) return fail('invalid-model', `material E must be > 0 (got ${material.E})`)
+  const factor = column.stiffnessFactor ?? 1
+  if (!positive(factor)) return fail('invalid-model', `stiffness factor must be > 0 (got ${factor})`)
+  if (!(Number.isFinite(column.Ix) && column.Ix >= 0 && Number.isFinite(column.Iy) && column.Iy >= 0)) {
+    return fail('invalid-model', `Ix and Iy must be finite and >= 0 (got ${column.Ix}, ${column.Iy})`)
+  }
+  if (!Number.isFinite(column.angle)) return fail('invalid-model', `angle must be finite (got ${column.angle})`)
+  if (!(Number.isFinite(column.at.x) && Number.isFinite(column.at.y))) {
+    return fail('invalid-model', 'its position is not finite')
+  }
+  const kx: number[] = []
+  const ky: number[] = []
+  for (let f = range.first; f <= range.last; f++) {
+    const floor = project.floors[f]
+    if (!floor) return fail('element-outside-floors', `floor index ${f} does not exist`)
+    if (!positive(floor.height)) return fail('invalid-model', `story height of ${floor.id} must be > 0`)
+    kx.push(columnStoryStiffness(material.E, column.Iy, floor.height, column.fixity, factor))
+    ky.push(columnStoryStiffness(material.E, column.Ix, floor.height, column.fixity, factor))
+  }
+  const standsOnFloor = range.below >= 0
+  const floors: number[] = []
+  if (standsOnFloor) floors.push(range.below)
+  for (let f = range.first; f <= range.last; f++) floors.push(f)
+  const c = Math.cos(column.angle)
+  const s = Math.sin(column.angle)
+  const make = (kind: 'columnX' | 'columnY', k: number[], d: { x: number; y: number }): AssembledElement => {
+    const fixedBase = shearChainStiffness(k)
+    return {
+      id: column.id,
+      kind,
+      floors,
+      map: elementMapRow(column.at, d),
+      standsOnFloor,
+      stiffness: standsOnFloor ? extendWithSupportFloor(fixedBase, k.length) : fixedBase,
+      isShearType: true,
+    }
+  }
+  const elements: AssembledElement[] = []
+  if (column.Iy > 0) elements.push(make('columnX', kx, { x: c, y: s }))
+  if (column.Ix > 0) elements.push(make('columnY', ky, { x: -s, y: c }))
+  return { elements, issues: [] }
+}

@@ -1,0 +1,160 @@
+/**
+ * Frame line (moment or braced frame acting in its own plane): shear-type story stiffness, entered
+ * directly or derived from the members by a stated simplified method. Units: N, m, Pa.
+ * @see MODELING.md §Lateral-resisting elements, docs/mechanics.md §Frame lines
+ */
+import { elementFloorRange } from '@/model'
+import type { FrameLine, Project } from '@/model'
+import { elementMapRow, extendWithSupportFloor, segmentDirection } from '../dofs'
+import type { AssembledElement, Issue } from '../results'
+
+/**
+ * Story stiffness of a regular moment frame by the equal-joint-rotation method, N/m:
+ * k = 12 E / (h² (1/ΣKc + 1/ΣKb)), ΣKc = (bays+1) Ic/h, ΣKb = bays Ib/bayWidth.
+ * Assumptions: every joint at the top and bottom of the story turns by the same angle, and the
+ * stories above and below are alike, so each beam level is shared by the two stories it joins.
+ * Slope-deflection then gives column end moments 6E Kc (theta - Delta/h), beam end moments 6E Kb theta,
+ * joint equilibrium at a level 2·ΣKc (theta - Delta/h) + 2·ΣKb theta = 0 and story shear
+ * V = 12E ΣKc (Delta/h - theta)/h, hence k above. Limits: Ib -> ∞ gives 12E ΣIc/h³ (fixed-fixed
+ * columns). The derivation is written out in docs/mechanics.md §Frame lines.
+ */
+export function momentFrameStoryStiffness(
+  E: number,
+  bays: number,
+  bayWidth: number,
+  columnI: number,
+  beamI: number,
+  h: number,
+): number {
+  const sumKc = ((bays + 1) * columnI) / h
+  const sumKb = (bays * beamI) / bayWidth
+  return (12 * E) / (h * h * (1 / sumKc + 1 / sumKb))
+}
+
+/**
+ * Story stiffness of a braced bay, N/m: braces · E A cos²α / L_d with L_d = sqrt(bayWidth² + h²) and
+ * cos α = bayWidth / L_d (pin-ended axial braces, rigid beams and columns).
+ * @see common practice: axial stiffness EA/L_d projected twice onto the story drift direction
+ */
+export function bracedFrameStoryStiffness(
+  E: number,
+  braces: number,
+  bayWidth: number,
+  braceArea: number,
+  h: number,
+): number {
+  const Ld = Math.hypot(bayWidth, h)
+  const cos = bayWidth / Ld
+  return (braces * E * braceArea * cos * cos) / Ld
+}
+
+/**
+ * Shear-type stiffness (n x n, row-major, N/m) of a chain of n stories with story stiffness k_s
+ * (story s joins floor s-1 and floor s; the base below story 0 is fixed): tridiagonal,
+ * K[i][i] = k_i + k_{i+1}, K[i][i+1] = -k_{i+1}.
+ * @see MODELING.md §Lateral-resisting elements (shear type)
+ */
+export function shearChainStiffness(storyStiffness: ArrayLike<number>): Float64Array {
+  const n = storyStiffness.length
+  const K = new Float64Array(n * n)
+  for (let i = 0; i < n; i++) {
+    const k = storyStiffness[i] as number
+    K[i * n + i] = (K[i * n + i] as number) + k
+    if (i > 0) {
+      K[(i - 1) * n + i - 1] = (K[(i - 1) * n + i - 1] as number) + k
+      K[(i - 1) * n + i] = -k
+      K[i * n + i - 1] = -k
+    }
+  }
+  return K
+}
+
+const positive = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v) && v > 0
+
+/** Assembled-element record of a frame line (issues instead of exceptions for bad input). */
+export function buildFrameLineElement(
+  project: Pick<Project, 'floors' | 'materials'>,
+  frame: FrameLine,
+): { element: AssembledElement | null; issues: Issue[] } {
+  const fail = (code: Issue['code'], why: string): { element: null; issues: Issue[] } => ({
+    element: null,
+    issues: [
+      {
+        code,
+        severity: 'warning',
+        message: `[engine] frame line ${frame.id} (${frame.name}): ${why}; it is left out of the analysis`,
+        refs: [frame.id],
+      },
+    ],
+  })
+  const seg = segmentDirection(frame.p1, frame.p2)
+  if (!seg) return fail('zero-length', 'its two end points coincide (zero length)')
+  const range = elementFloorRange(project, frame)
+  if (!range) {
+    return fail(
+      'element-outside-floors',
+      `its floor range (base ${frame.base}, top ${frame.top}) is empty or names an unknown floor`,
+    )
+  }
+  const spec = frame.stiffness
+  let E = 0
+  if (spec.kind !== 'direct') {
+    const material = project.materials[spec.material]
+    if (!material) return fail('invalid-model', `material "${spec.material}" does not exist`)
+    if (!positive(material.E)) return fail('invalid-model', `material E must be > 0 (got ${material.E})`)
+    E = material.E
+  }
+  const k: number[] = []
+  for (let f = range.first; f <= range.last; f++) {
+    const floor = project.floors[f]
+    if (!floor) return fail('element-outside-floors', `floor index ${f} does not exist`)
+    const h = floor.height
+    if (!positive(h)) return fail('invalid-model', `story height of ${floor.id} must be > 0`)
+    let ks: number
+    switch (spec.kind) {
+      case 'direct':
+        ks = spec.stories?.[floor.id] ?? spec.storyStiffness
+        break
+      case 'moment':
+        if (!(Number.isInteger(spec.bays) && spec.bays >= 1)) {
+          return fail('invalid-model', `bays must be a whole number >= 1 (got ${spec.bays})`)
+        }
+        if (!positive(spec.bayWidth) || !positive(spec.columnI) || !positive(spec.beamI)) {
+          return fail('invalid-model', 'bay width, column I and beam I must all be > 0')
+        }
+        ks = momentFrameStoryStiffness(E, spec.bays, spec.bayWidth, spec.columnI, spec.beamI, h)
+        break
+      case 'braced':
+        if (!positive(spec.braces) || !positive(spec.bayWidth) || !positive(spec.braceArea)) {
+          return fail('invalid-model', 'braces, bay width and brace area must all be > 0')
+        }
+        ks = bracedFrameStoryStiffness(E, spec.braces, spec.bayWidth, spec.braceArea, h)
+        break
+      default: {
+        const never: never = spec
+        return fail('unsupported-element', `unknown stiffness kind ${String((never as { kind: unknown }).kind)}`)
+      }
+    }
+    if (!(Number.isFinite(ks) && ks >= 0)) {
+      return fail('invalid-model', `story stiffness at ${floor.id} must be a finite number >= 0 (got ${ks})`)
+    }
+    k.push(ks)
+  }
+  const fixedBase = shearChainStiffness(k)
+  const standsOnFloor = range.below >= 0
+  const floors: number[] = []
+  if (standsOnFloor) floors.push(range.below)
+  for (let f = range.first; f <= range.last; f++) floors.push(f)
+  return {
+    element: {
+      id: frame.id,
+      kind: 'frameLine',
+      floors,
+      map: elementMapRow(frame.p1, seg.d),
+      standsOnFloor,
+      stiffness: standsOnFloor ? extendWithSupportFloor(fixedBase, k.length) : fixedBase,
+      isShearType: true,
+    },
+    issues: [],
+  }
+}
