@@ -20,10 +20,16 @@ export interface StiffnessSolver {
   /**
    * All diagonal 3x3 blocks of K^-1 at O at once, floor-major (block j at 9j, row-major). About the
    * cost of one more factorization; computed once and cached. The returned array is shared: do not
-   * modify it.
+   * modify it. Optional so that simple test doubles stay valid; createStiffnessSolver always has it.
    */
-  floorFlexibilities(): Float64Array
+  floorFlexibilities?(): Float64Array
   /** Smallest pivot of the factorization relative to its original diagonal (1 = uncoupled). */
+  readonly minPivotRatio?: number
+}
+
+/** The solver createStiffnessSolver returns: every optional member of StiffnessSolver present. */
+export interface FactoredStiffness extends StiffnessSolver {
+  floorFlexibilities(): Float64Array
   readonly minPivotRatio: number
 }
 
@@ -46,7 +52,7 @@ const MAX_MECHANISM_ISSUES = 6
 export function createStiffnessSolver(
   structure: Structure,
   options: SolverOptions = {},
-): { ok: true; solver: StiffnessSolver; issues: Issue[] } | { ok: false; issues: Issue[] } {
+): { ok: true; solver: FactoredStiffness; issues: Issue[] } | { ok: false; issues: Issue[] } {
   const n = structure.dofCount
   const N = structure.floorCount
   if (n !== 3 * N || structure.stiffness.length !== n * n) {
@@ -151,7 +157,7 @@ export function createStiffnessSolver(
     haveBlock[j] = 1
   }
 
-  const solver: StiffnessSolver = {
+  const solver: FactoredStiffness = {
     minPivotRatio: Number.isFinite(minRatio) ? minRatio : 1,
     solve(rhs: Float64Array): Float64Array {
       if (rhs.length !== n) throw new RangeError(`[engine] solve: rhs has ${rhs.length} terms, expected ${n}`)
