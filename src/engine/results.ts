@@ -128,6 +128,8 @@ export interface ModalResult {
   /** Which solver produced the modes and whether all were found. */
   readonly solver: string
   readonly complete: boolean
+  /** Problems met while solving (e.g. a floor without rotary mass: no modes); absent when none. */
+  readonly issues?: readonly Issue[]
 }
 
 // ---------------------------------------------------------------- centres (mechanics)
