@@ -1,5 +1,5 @@
 /** Reading and writing the project file at the browser edge. */
-import { parseProject } from '@/model'
+import { parseProject, serializeProject } from '@/model'
 import type { Project } from '@/model'
 
 export type OpenResult =
@@ -27,7 +27,7 @@ export function readProjectText(text: string, fileName = 'file'): OpenResult {
 
 /** The saved file's text: the document as it is (SI units), pretty-printed. */
 export function projectToText(project: Project): string {
-  return JSON.stringify(project, null, 2) + '\n'
+  return serializeProject(project)
 }
 
 /** A file name from the project name: lowercase, dashes, `.gyre.json`. */

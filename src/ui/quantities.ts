@@ -1,20 +1,16 @@
 /**
- * Display units of the UI edge. The model is SI; each quantity kind has one display unit per unit
- * system, a factor (SI value of one display unit) and a number of decimals. Parsing a typed value
+ * Display of SI values in the UI: each field kind uses a model quantity (factors and labels from
+ * `@/model` units) with a fixed number of decimals, so columns of numbers line up. Parsing a typed value
  * converts back to SI and validates it, naming the field in the message.
  */
-import type { UnitSystem } from '@/model'
-
-const G = 9.80665
-const FT = 0.3048
-const IN = 0.0254
-const LBF = 4.4482216152605
-const KIP = 1000 * LBF
+import { fromDisplay as modelFromDisplay, unitLabel } from '@/model'
+import type { Quantity, UnitSystem } from '@/model'
 
 export type QuantityKind =
   | 'length'
   | 'elevation'
   | 'thickness'
+  | 'displacement'
   | 'secondMoment'
   | 'modulus'
   | 'stiffness'
@@ -23,6 +19,7 @@ export type QuantityKind =
   | 'areaMass'
   | 'lineMass'
   | 'rotaryInertia'
+  | 'sectionArea'
   | 'area'
   | 'angle'
   | 'ratio'
@@ -35,53 +32,60 @@ interface UnitDef {
   readonly decimals: number
 }
 
-const UNITS: Record<QuantityKind, Record<UnitSystem, UnitDef>> = {
-  length: { SI: { symbol: 'm', factor: 1, decimals: 2 }, US: { symbol: 'ft', factor: FT, decimals: 2 } },
-  elevation: { SI: { symbol: 'm', factor: 1, decimals: 2 }, US: { symbol: 'ft', factor: FT, decimals: 1 } },
-  thickness: { SI: { symbol: 'mm', factor: 0.001, decimals: 0 }, US: { symbol: 'in', factor: IN, decimals: 1 } },
-  secondMoment: { SI: { symbol: 'm⁴', factor: 1, decimals: 5 }, US: { symbol: 'in⁴', factor: IN ** 4, decimals: 0 } },
-  modulus: { SI: { symbol: 'GPa', factor: 1e9, decimals: 1 }, US: { symbol: 'ksi', factor: KIP / IN ** 2, decimals: 0 } },
-  stiffness: { SI: { symbol: 'kN/m', factor: 1000, decimals: 0 }, US: { symbol: 'kip/in', factor: KIP / IN, decimals: 1 } },
-  force: { SI: { symbol: 'kN', factor: 1000, decimals: 0 }, US: { symbol: 'kip', factor: KIP, decimals: 0 } },
-  // Masses are shown as the weight they carry, as engineers enter them.
-  mass: { SI: { symbol: 't', factor: 1000, decimals: 1 }, US: { symbol: 'kip (weight)', factor: KIP / G, decimals: 1 } },
-  areaMass: { SI: { symbol: 'kN/m²', factor: 1000 / G, decimals: 2 }, US: { symbol: 'psf', factor: LBF / FT ** 2 / G, decimals: 0 } },
-  lineMass: { SI: { symbol: 'kN/m', factor: 1000 / G, decimals: 2 }, US: { symbol: 'kip/ft', factor: KIP / FT / G, decimals: 3 } },
-  rotaryInertia: { SI: { symbol: 't·m²', factor: 1000, decimals: 0 }, US: { symbol: 'kip·s²·ft', factor: KIP * FT, decimals: 0 } },
-  area: { SI: { symbol: 'm²', factor: 1, decimals: 1 }, US: { symbol: 'ft²', factor: FT * FT, decimals: 0 } },
-  angle: { SI: { symbol: '°', factor: Math.PI / 180, decimals: 1 }, US: { symbol: '°', factor: Math.PI / 180, decimals: 1 } },
-  ratio: { SI: { symbol: '', factor: 1, decimals: 3 }, US: { symbol: '', factor: 1, decimals: 3 } },
-  period: { SI: { symbol: 's', factor: 1, decimals: 3 }, US: { symbol: 's', factor: 1, decimals: 3 } },
+/** Which model quantity each UI field shows, and how many decimals in each system. */
+const KINDS: Record<QuantityKind, { readonly quantity: Quantity; readonly decimals: Record<UnitSystem, number> }> = {
+  length: { quantity: 'length', decimals: { SI: 2, US: 2 } },
+  elevation: { quantity: 'length', decimals: { SI: 2, US: 1 } },
+  thickness: { quantity: 'thickness', decimals: { SI: 0, US: 1 } },
+  displacement: { quantity: 'displacement', decimals: { SI: 1, US: 2 } },
+  secondMoment: { quantity: 'inertia', decimals: { SI: 5, US: 0 } },
+  modulus: { quantity: 'modulus', decimals: { SI: 1, US: 0 } },
+  stiffness: { quantity: 'stiffness', decimals: { SI: 0, US: 1 } },
+  force: { quantity: 'force', decimals: { SI: 0, US: 0 } },
+  mass: { quantity: 'mass', decimals: { SI: 1, US: 2 } },
+  areaMass: { quantity: 'areaMass', decimals: { SI: 2, US: 0 } },
+  lineMass: { quantity: 'lineMass', decimals: { SI: 2, US: 3 } },
+  rotaryInertia: { quantity: 'polarInertia', decimals: { SI: 0, US: 0 } },
+  sectionArea: { quantity: 'sectionArea', decimals: { SI: 1, US: 2 } },
+  area: { quantity: 'area', decimals: { SI: 1, US: 0 } },
+  angle: { quantity: 'angle', decimals: { SI: 1, US: 1 } },
+  ratio: { quantity: 'ratio', decimals: { SI: 3, US: 3 } },
+  period: { quantity: 'period', decimals: { SI: 3, US: 3 } },
+}
+
+function def(kind: QuantityKind, system: UnitSystem): UnitDef {
+  const k = KINDS[kind]
+  return { symbol: unitLabel(k.quantity, system), factor: modelFromDisplay(1, k.quantity, system), decimals: k.decimals[system] }
 }
 
 /** The display unit symbol of a quantity. */
 export function unitSymbol(kind: QuantityKind, system: UnitSystem): string {
-  return UNITS[kind][system].symbol
+  return def(kind, system).symbol
 }
 
 /** SI value to display number. */
 export function toDisplay(si: number, kind: QuantityKind, system: UnitSystem): number {
-  return si / UNITS[kind][system].factor
+  return si / def(kind, system).factor
 }
 
 /** Display number to SI value. */
 export function fromDisplay(value: number, kind: QuantityKind, system: UnitSystem): number {
-  return value * UNITS[kind][system].factor
+  return value * def(kind, system).factor
 }
 
 /** A display string without the unit, rounded to the quantity's decimals. */
 export function formatNumber(si: number, kind: QuantityKind, system: UnitSystem, decimals?: number): string {
   if (!Number.isFinite(si)) return '—'
-  const def = UNITS[kind][system]
-  const v = si / def.factor
-  const d = decimals ?? def.decimals
+  const unit = def(kind, system)
+  const v = si / unit.factor
+  const d = decimals ?? unit.decimals
   const text = v.toFixed(d)
   return text === '-0' || /^-0\.0+$/.test(text) ? text.slice(1) : text
 }
 
 /** A display string with its unit, e.g. "12.50 m" or "41.0 ft". */
 export function formatQuantity(si: number, kind: QuantityKind, system: UnitSystem, decimals?: number): string {
-  const symbol = UNITS[kind][system].symbol
+  const symbol = def(kind, system).symbol
   const text = formatNumber(si, kind, system, decimals)
   return symbol ? (symbol === '°' ? `${text}°` : `${text} ${symbol}`) : text
 }

@@ -1,0 +1,79 @@
+import { useEffect, useState } from 'react'
+import type { UnitSystem } from '@/model'
+import { formatNumber, parseDisplayInput, unitSymbol } from './quantities'
+import type { FieldRule, QuantityKind } from './quantities'
+
+interface Props {
+  readonly label: string
+  /** SI value. */
+  readonly value: number
+  readonly kind: QuantityKind
+  readonly units: UnitSystem
+  readonly rule?: FieldRule
+  readonly testId: string
+  /** Apply the SI value; return a refusal message to show, or null when accepted. */
+  readonly onCommit: (value: number) => string | null
+  readonly disabled?: boolean
+}
+
+/**
+ * A number in display units. Commits on Enter or leaving the field; Escape restores the model value.
+ * A refused value stays in the box, marked, with the message below; the model is not touched.
+ */
+export function NumberField({ label, value, kind, units, rule, testId, onCommit, disabled }: Props) {
+  const shown = formatNumber(value, kind, units)
+  const [text, setText] = useState(shown)
+  const [error, setError] = useState<string | null>(null)
+  useEffect(() => {
+    setText(shown)
+    setError(null)
+  }, [shown])
+
+  const commit = (): void => {
+    if (text === shown) {
+      setError(null)
+      return
+    }
+    const parsed = parseDisplayInput(text, label, kind, units, rule)
+    if (!parsed.ok) {
+      setError(parsed.message)
+      return
+    }
+    const refusal = onCommit(parsed.value)
+    setError(refusal ? `${label}: ${refusal.replace(/^[^:]*:\s*/, '')}` : null)
+  }
+  const symbol = unitSymbol(kind, units)
+  return (
+    <>
+      <label className="field">
+        <span>{label}</span>
+        <input
+          type="text"
+          inputMode="decimal"
+          value={text}
+          disabled={disabled}
+          aria-invalid={error ? 'true' : 'false'}
+          data-testid={testId}
+          onChange={(e) => setText(e.target.value)}
+          onBlur={commit}
+          onKeyDown={(e) => {
+            if (e.key === 'Enter') {
+              e.preventDefault()
+              commit()
+            } else if (e.key === 'Escape') {
+              e.stopPropagation()
+              setText(shown)
+              setError(null)
+            }
+          }}
+        />
+        <span className="unit">{symbol}</span>
+      </label>
+      {error ? (
+        <p className="error" role="alert" data-testid={`${testId}-error`}>
+          {error}
+        </p>
+      ) : null}
+    </>
+  )
+}

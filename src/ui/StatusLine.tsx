@@ -1,0 +1,45 @@
+import { CAUTION, CAUTION_SHORT } from '@/model'
+import type { AnalysisState } from './analysisClient'
+
+interface Props {
+  readonly analysis: AnalysisState
+  readonly message: string | null
+  readonly autosavedAt: string | null
+  readonly floorLabel: string
+  readonly toolLabel: string
+  readonly selectionCount: number
+}
+
+/** One line at the bottom: tool, floor, selection, analysis state, autosave, and the short caution. */
+export function StatusLine({ analysis, message, autosavedAt, floorLabel, toolLabel, selectionCount }: Props) {
+  const state = analysis.error
+    ? 'failed'
+    : analysis.isStale
+      ? 'stale'
+      : analysis.result
+        ? 'current'
+        : 'waiting'
+  const text =
+    state === 'failed'
+      ? `Analysis failed: ${analysis.error ?? ''}`
+      : state === 'stale'
+        ? 'Analysis updating…'
+        : state === 'current'
+          ? `Analysis current (rev ${analysis.resultRevision ?? '-'}, ${analysis.lastWorkerMs?.toFixed(0) ?? '-'} ms${analysis.inWorker ? '' : ', main thread'})`
+          : 'Analysis waiting'
+  return (
+    <footer className="status" data-testid="status-line">
+      <span data-testid="status-tool">{toolLabel}</span>
+      <span>{floorLabel}</span>
+      <span>{selectionCount ? `${selectionCount} selected` : 'nothing selected'}</span>
+      <span className={state} data-testid="analysis-state" data-state={state}>
+        {text}
+      </span>
+      <span data-testid="autosave-state">{autosavedAt ? `autosaved ${autosavedAt.slice(11, 19)}` : 'not yet autosaved'}</span>
+      {message ? <span data-testid="status-message">{message}</span> : null}
+      <span className="caution" title={CAUTION}>
+        {CAUTION_SHORT}
+      </span>
+    </footer>
+  )
+}
