@@ -1044,14 +1044,16 @@ function readSettings(ctx: Ctx, v: unknown): AnalysisSettings | undefined {
       raw.forEach((r, i) => {
         const p = at('settings.criterionSets', i)
         const set = readCriterionSet(ctx, p, r)
-        if (!set) return
-        const dup = seen.get(set.id)
-        if (dup !== undefined) {
-          fail(ctx, key(p, 'id'), `duplicate criterion set id ${show(set.id)} (also settings.criterionSets[${dup}])`)
-          return
+        const rawId = isRecord(r) && typeof r.id === 'string' ? r.id : undefined
+        if (rawId !== undefined) {
+          const dup = seen.get(rawId)
+          if (dup !== undefined) {
+            fail(ctx, key(p, 'id'), `duplicate criterion set id ${show(rawId)} (also settings.criterionSets[${dup}])`)
+            return
+          }
+          seen.set(rawId, i)
         }
-        seen.set(set.id, i)
-        criterionSets?.push(set)
+        if (set) criterionSets?.push(set)
       })
     }
   }
