@@ -1,0 +1,280 @@
+/**
+ * The r3f canvas of the 3D view: shared geometry (once per model revision), the animation clock
+ * driver, camera presets with orbit controls, and a render step that can hand each finished frame to
+ * an exporter. Frame loop 'demand': frames are drawn only while something moves or changes.
+ */
+import { useEffect, useMemo, useRef } from 'react'
+import type { RefObject } from 'react'
+import { Canvas, useFrame, useThree } from '@react-three/fiber'
+import * as THREE from 'three'
+import { OrbitControls } from 'three/examples/jsm/controls/OrbitControls.js'
+import { useStore } from 'zustand'
+import type { BuildingLayout } from './buildingLayout'
+import { SLAB_THICKNESS } from './buildingLayout'
+import { BuildingInstance } from './BuildingInstance'
+import type { FloorMarks, SharedResources } from './BuildingInstance'
+import type { RigidTransform } from './modeAnimation'
+import type { MotionSource } from './motionSource'
+import { BASE_CYCLES_PER_SECOND } from './viewerStore'
+import type { AnimationClock, CameraPreset, ViewerStore } from './viewerStore'
+
+/** Called after every rendered frame with the WebGL canvas (exports composite it then). */
+export type FrameCapture = (canvas: HTMLCanvasElement) => void
+
+interface Props {
+  readonly layout: BuildingLayout
+  readonly motionA: MotionSource | null
+  readonly motionB: MotionSource | null
+  readonly marks: FloorMarks
+  readonly store: ViewerStore
+  readonly clock: AnimationClock
+  readonly capture: RefObject<FrameCapture | null>
+  /** Per-frame hook for DOM overlays (the plan trace), run after the clock advances. */
+  readonly onFrame: RefObject<(() => void) | null>
+  readonly transformsA: RefObject<RigidTransform[]>
+  readonly onReady?: () => void
+}
+
+function buildShared(layout: BuildingLayout): SharedResources {
+  const slabGeometry = new Map<string, THREE.BufferGeometry>()
+  const slabEdges = new Map<string, THREE.BufferGeometry>()
+  for (const floor of layout.floors) {
+    for (const slab of floor.slabs) {
+      if (slabGeometry.has(slab.id) || slab.outline.length < 3) continue
+      const shape = new THREE.Shape(slab.outline.map((p) => new THREE.Vector2(p.x, p.y)))
+      for (const hole of slab.openings) {
+        if (hole.length >= 3) shape.holes.push(new THREE.Path(hole.map((p) => new THREE.Vector2(p.x, p.y))))
+      }
+      const g = new THREE.ExtrudeGeometry(shape, { depth: SLAB_THICKNESS, bevelEnabled: false })
+      slabGeometry.set(slab.id, g)
+      slabEdges.set(slab.id, new THREE.EdgesGeometry(g, 30))
+    }
+  }
+  // Ghost of the members: every vertical member edge at rest (walls and columns as outlines).
+  const ghostPositions: number[] = []
+  for (const mesh of [layout.walls, layout.columns]) {
+    const n = mesh.positions.length / 3 / 24
+    for (let k = 0; k < n; k++) {
+      // The side face 2 of each prism holds corners 0,1,5,4: draw its two vertical edges.
+      const base = (k * 24 + 2 * 4) * 3
+      const p = mesh.positions
+      for (const [a, b] of [
+        [0, 3],
+        [1, 2],
+      ] as const) {
+        ghostPositions.push(p[base + a * 3]!, p[base + a * 3 + 1]!, p[base + a * 3 + 2]!)
+        ghostPositions.push(p[base + b * 3]!, p[base + b * 3 + 1]!, p[base + b * 3 + 2]!)
+      }
+    }
+  }
+  ghostPositions.push(...layout.frames.positions)
+  const ghostMembers = new THREE.BufferGeometry()
+  ghostMembers.setAttribute('position', new THREE.Float32BufferAttribute(ghostPositions, 3))
+  return {
+    slabGeometry,
+    slabEdges,
+    ghostMembers,
+    ghostMaterial: new THREE.LineBasicMaterial({ color: '#5d6470', transparent: true, opacity: 0.35 }),
+    cmGeometry: new THREE.SphereGeometry(0.45, 16, 10),
+    crGeometry: new THREE.OctahedronGeometry(0.6),
+    cmMaterial: new THREE.MeshStandardMaterial({ color: '#6b3fa0' }),
+    crMaterial: new THREE.MeshStandardMaterial({ color: '#14806b' }),
+    cmLineMaterial: new THREE.LineBasicMaterial({ color: '#6b3fa0' }),
+    crLineMaterial: new THREE.LineBasicMaterial({ color: '#14806b' }),
+  }
+}
+
+function disposeShared(s: SharedResources): void {
+  s.slabGeometry.forEach((g) => g.dispose())
+  s.slabEdges.forEach((g) => g.dispose())
+  s.ghostMembers.dispose()
+  s.ghostMaterial.dispose()
+  s.cmGeometry.dispose()
+  s.crGeometry.dispose()
+  s.cmMaterial.dispose()
+  s.crMaterial.dispose()
+  s.cmLineMaterial.dispose()
+  s.crLineMaterial.dispose()
+}
+
+/** Gap between the two copies of the side-by-side view, as a fraction of the plan width. */
+const SIDE_GAP = 0.35
+
+export function sideOffset(layout: BuildingLayout): number {
+  const w = layout.box.maxX - layout.box.minX
+  return w * (1 + SIDE_GAP)
+}
+
+export function ViewerCanvas(props: Props) {
+  const { layout, store, onReady } = props
+  return (
+    <Canvas
+      frameloop="demand"
+      dpr={[1, 2]}
+      gl={{ antialias: true, preserveDrawingBuffer: false }}
+      camera={{ fov: 35, near: 0.5, far: 20000, position: [60, -60, 40] }}
+      onCreated={({ camera }) => {
+        camera.up.set(0, 0, 1)
+        onReady?.()
+      }}
+      data-testid="viewer-canvas"
+    >
+      <Scene {...props} layout={layout} store={store} />
+    </Canvas>
+  )
+}
+
+function Scene(props: Props) {
+  const { layout, motionA, motionB, marks, store, clock, capture, onFrame, transformsA } = props
+  const shared = useMemo(() => buildShared(layout), [layout])
+  useEffect(() => () => disposeShared(shared), [shared])
+  const sideBySide = useStore(store, (s) => s.sideBySide && s.presenting)
+  const showGhost = useStore(store, (s) => s.showGhost)
+  const showCentres = useStore(store, (s) => s.showCentres)
+  const invalidate = useThree((s) => s.invalidate)
+  useEffect(() => store.subscribe(() => invalidate()), [store, invalidate])
+  useEffect(() => invalidate(), [motionA, motionB, layout, invalidate])
+  return (
+    <>
+      <color attach="background" args={['#ebe8e1']} />
+      <hemisphereLight args={['#fbf8f0', '#8a8478', 1.6]} />
+      <directionalLight position={[-40, -70, 120]} intensity={1.4} />
+      <ClockDriver store={store} clock={clock} onFrame={onFrame} />
+      <BuildingInstance
+        layout={layout}
+        shared={shared}
+        motion={motionA}
+        marks={marks}
+        store={store}
+        clock={clock}
+        offsetX={0}
+        visible
+        showGhost={showGhost}
+        showCentres={showCentres}
+        transformsOut={transformsA}
+      />
+      <BuildingInstance
+        layout={layout}
+        shared={shared}
+        motion={motionB}
+        marks={marks}
+        store={store}
+        clock={clock}
+        offsetX={sideOffset(layout)}
+        visible={sideBySide}
+        showGhost={showGhost}
+        showCentres={showCentres}
+      />
+      <CameraRig layout={layout} store={store} sideBySide={sideBySide} />
+      <RenderStep capture={capture} />
+    </>
+  )
+}
+
+function ClockDriver(props: {
+  store: ViewerStore
+  clock: AnimationClock
+  onFrame: RefObject<(() => void) | null>
+}) {
+  const { store, clock, onFrame } = props
+  useFrame((state, delta) => {
+    const s = store.getState()
+    // After an idle spell the first delta is the whole pause: clamp it so motion resumes smoothly.
+    const dt = Math.min(Math.max(delta, 0), 0.1)
+    if (s.playing || s.recording) {
+      clock.phase = (clock.phase + dt * 2 * Math.PI * BASE_CYCLES_PER_SECOND * s.speed) % (2 * Math.PI)
+      clock.time += dt * s.speed
+      state.invalidate()
+    }
+    onFrame.current?.()
+  }, -1)
+  return null
+}
+
+function RenderStep(props: { capture: RefObject<FrameCapture | null> }) {
+  const { capture } = props
+  useFrame(({ gl, scene, camera }) => {
+    gl.render(scene, camera)
+    capture.current?.(gl.domElement)
+  }, 1)
+  return null
+}
+
+/** Camera position and target of a preset for a box of plan extent and height. */
+export function presetView(
+  preset: CameraPreset,
+  box: { minX: number; maxX: number; minY: number; maxY: number },
+  height: number,
+  fovDeg: number,
+  aspect: number,
+): { position: [number, number, number]; target: [number, number, number] } {
+  const cx = (box.minX + box.maxX) / 2
+  const cy = (box.minY + box.maxY) / 2
+  const cz = height / 2
+  const w = box.maxX - box.minX
+  const d = box.maxY - box.minY
+  const radius = 0.5 * Math.hypot(w, d, height) || 10
+  const halfV = (fovDeg * Math.PI) / 360
+  const halfH = Math.atan(Math.tan(halfV) * Math.max(aspect, 0.2))
+  const dist = (radius / Math.sin(Math.min(halfV, halfH))) * 1.05
+  switch (preset) {
+    case 'top':
+      // A hair off the vertical: orbit controls cannot look exactly along their up axis.
+      return { position: [cx, cy - dist * 1e-3, height + dist], target: [cx, cy, height] }
+    case 'front':
+      return { position: [cx, cy - dist, cz], target: [cx, cy, cz] }
+    case 'side':
+      return { position: [cx + dist, cy, cz], target: [cx, cy, cz] }
+    case 'three-quarter':
+      return {
+        position: [cx + dist * 0.62, cy - dist * 0.68, cz + dist * 0.42],
+        target: [cx, cy, cz],
+      }
+    default: {
+      const never: never = preset
+      throw new TypeError(`[viewer] unknown camera preset ${String(never)}`)
+    }
+  }
+}
+
+function CameraRig(props: { layout: BuildingLayout; store: ViewerStore; sideBySide: boolean }) {
+  const { layout, store, sideBySide } = props
+  const camera = useThree((s) => s.camera)
+  const gl = useThree((s) => s.gl)
+  const invalidate = useThree((s) => s.invalidate)
+  const size = useThree((s) => s.size)
+  const controlsRef = useRef<OrbitControls | null>(null)
+  const fit = useRef({ layout, sideBySide, aspect: size.width / Math.max(1, size.height) })
+  fit.current = { layout, sideBySide, aspect: size.width / Math.max(1, size.height) }
+
+  useEffect(() => {
+    camera.up.set(0, 0, 1)
+    const controls = new OrbitControls(camera, gl.domElement)
+    controls.enableDamping = false
+    controlsRef.current = controls
+    const onChange = () => invalidate()
+    controls.addEventListener('change', onChange)
+    const apply = (preset: CameraPreset) => {
+      const f = fit.current
+      const box = { ...f.layout.box }
+      if (f.sideBySide) box.maxX += sideOffset(f.layout)
+      const fov = camera instanceof THREE.PerspectiveCamera ? camera.fov : 35
+      const view = presetView(preset, box, f.layout.height, fov, f.aspect)
+      camera.position.set(...view.position)
+      controls.target.set(...view.target)
+      controls.update()
+      invalidate()
+    }
+    apply(store.getState().cameraRequest.preset)
+    const unsubscribe = store.subscribe((s, prev) => {
+      if (s.cameraRequest !== prev.cameraRequest) apply(s.cameraRequest.preset)
+    })
+    return () => {
+      unsubscribe()
+      controls.removeEventListener('change', onChange)
+      controls.dispose()
+      controlsRef.current = null
+    }
+  }, [camera, gl, invalidate, store])
+  return null
+}
