@@ -28,6 +28,9 @@ import type {
   WallId,
   WallStoryOverride,
 } from '@/model'
+import { choleskyFactor, choleskySolveRows } from '@/engine/eigen'
+import type { AssembledElement, FloorProps, Structure } from '@/engine/results'
+import type { StiffnessSolver } from '@/engine/solve'
 
 /** Options of `generateBuilding`. */
 export interface GenerateBuildingOptions {
@@ -321,5 +324,156 @@ export function transformProject(
     walls: mapRecord(project.walls, (w) => ({ ...w, p1: tp(w.p1), p2: tp(w.p2) })),
     frameLines: mapRecord(project.frameLines, (f) => ({ ...f, p1: tp(f.p1), p2: tp(f.p2) })),
     columns: mapRecord(project.columns, (col) => ({ ...col, at: tp(col.at), angle: col.angle + move.angle })),
+  }
+}
+
+// ---------------------------------------------------------------- hand-built structures (tests only)
+
+/** One floor of a hand-built structure: mass kg, centre of mass m, polar inertia about the CM kg·m². */
+export interface HandFloor {
+  readonly mass: number
+  readonly cm?: Point
+  readonly J: number
+  /** Story height below, m (default 3). */
+  readonly height?: number
+  /** Plan outline vertices (extreme points), default a 10 m square around the CM. */
+  readonly outline?: readonly Point[]
+}
+
+/** A hand-built lateral element: map row a and its lateral stiffness over floors 0..n_e-1 of `floors`. */
+export interface HandElement {
+  readonly id?: string
+  /** Plan point on the line and direction angle, rad (map a = [cos, sin, x sin - y cos]). */
+  readonly at: Point
+  readonly angle: number
+  /** Shear type: story stiffness per story (story i under floor i), N/m; zeros where absent. */
+  readonly storyStiffness?: readonly number[]
+  /** Or a full lateral stiffness over all floors from floor 0 up, row-major, N/m. */
+  readonly matrix?: readonly number[]
+}
+
+/**
+ * A Structure (results.ts contract) assembled by hand: K = sum A' k_e A, M per MODELING.md (mass block
+ * about O). For tests that must not depend on buildStructure.
+ */
+export function structureFromParts(floorsIn: readonly HandFloor[], elementsIn: readonly HandElement[]): Structure {
+  const nf = floorsIn.length
+  const n = 3 * nf
+  const K = new Float64Array(n * n)
+  const M = new Float64Array(n * n)
+  let total = 0
+  let sx = 0
+  let sy = 0
+  let z = 0
+  const floors: FloorProps[] = floorsIn.map((f, i) => {
+    const cm = f.cm ?? { x: 0, y: 0 }
+    const h = f.height ?? 3
+    z += h
+    const outline = f.outline ?? [
+      { x: cm.x - 5, y: cm.y - 5 },
+      { x: cm.x + 5, y: cm.y - 5 },
+      { x: cm.x + 5, y: cm.y + 5 },
+      { x: cm.x - 5, y: cm.y + 5 },
+    ]
+    const o = 3 * i
+    const m = f.mass
+    M[o * n + o] = m
+    M[(o + 1) * n + o + 1] = m
+    M[o * n + o + 2] = -m * cm.y
+    M[(o + 2) * n + o] = -m * cm.y
+    M[(o + 1) * n + o + 2] = m * cm.x
+    M[(o + 2) * n + o + 1] = m * cm.x
+    M[(o + 2) * n + o + 2] = f.J + m * (cm.x * cm.x + cm.y * cm.y)
+    total += m
+    sx += m * cm.x
+    sy += m * cm.y
+    const xs = outline.map((p) => p.x)
+    const ys = outline.map((p) => p.y)
+    return {
+      id: `F${i + 1}`,
+      name: `Floor ${i + 1}`,
+      index: i,
+      elevation: z,
+      height: h,
+      mass: m,
+      centreOfMass: cm,
+      polarInertia: f.J,
+      radiusOfGyration: Math.sqrt(f.J / m),
+      slabArea: 100,
+      extent: { minX: Math.min(...xs), maxX: Math.max(...xs), minY: Math.min(...ys), maxY: Math.max(...ys) },
+      extremePoints: outline,
+    }
+  })
+  const elements: AssembledElement[] = elementsIn.map((e, idx) => {
+    const c = Math.cos(e.angle)
+    const s = Math.sin(e.angle)
+    const a: [number, number, number] = [c, s, e.at.x * s - e.at.y * c]
+    const ke = new Float64Array(nf * nf)
+    if (e.matrix) {
+      ke.set(e.matrix)
+    } else {
+      const ks = e.storyStiffness ?? []
+      for (let i = 0; i < nf; i++) {
+        const k = ks[i] ?? 0
+        ke[i * nf + i]! += k
+        if (i > 0) {
+          ke[(i - 1) * nf + i - 1]! += k
+          ke[(i - 1) * nf + i]! -= k
+          ke[i * nf + i - 1]! -= k
+        }
+      }
+    }
+    for (let i = 0; i < nf; i++) {
+      for (let j = 0; j < nf; j++) {
+        const k = ke[i * nf + j]!
+        if (k === 0) continue
+        for (let p = 0; p < 3; p++) for (let q = 0; q < 3; q++) K[(3 * i + p) * n + 3 * j + q]! += k * a[p]! * a[q]!
+      }
+    }
+    return {
+      id: e.id ?? `e${idx + 1}`,
+      kind: 'frameLine',
+      floors: Array.from({ length: nf }, (_, i) => i),
+      map: a,
+      standsOnFloor: false,
+      stiffness: ke,
+      isShearType: !e.matrix,
+    }
+  })
+  return {
+    floorCount: nf,
+    dofCount: n,
+    floors,
+    stiffness: K,
+    mass: M,
+    elements,
+    allShearType: elements.every((e) => e.isShearType),
+    buildingCentreOfMass: { x: sx / total, y: sy / total },
+    totalMass: total,
+  }
+}
+
+/** A dense Cholesky StiffnessSolver for tests (independent of solve.ts). */
+export function denseStiffnessSolver(structure: Structure): StiffnessSolver {
+  const n = structure.dofCount
+  const { L } = choleskyFactor(structure.stiffness, n)
+  if (!L) throw new Error('[test] denseStiffnessSolver: K is not positive definite')
+  const solve = (rhs: Float64Array): Float64Array => {
+    const x = new Float64Array(rhs)
+    choleskySolveRows(L, n, x, 1)
+    return x
+  }
+  return {
+    solve,
+    floorFlexibility(j: number): Float64Array {
+      const F = new Float64Array(9)
+      for (let c = 0; c < 3; c++) {
+        const e = new Float64Array(n)
+        e[3 * j + c] = 1
+        const u = solve(e)
+        for (let r = 0; r < 3; r++) F[3 * r + c] = u[3 * j + r]!
+      }
+      return F
+    },
   }
 }

@@ -46,6 +46,13 @@ export interface ProjectBuilderOptions {
   readonly name?: string
 }
 
+/** FrameStiffness with plain-string material ids (test convenience). */
+export type LooseFrameStiffness = FrameStiffness extends infer T
+  ? T extends { readonly material: unknown }
+    ? Omit<T, 'material'> & { readonly material: string }
+    : T
+  : never
+
 /** Which floors a slab/mass goes on: one floor id, a list, or 'all' (default 'all'). */
 export type FloorTarget = string | readonly string[] | 'all'
 
@@ -88,7 +95,7 @@ export interface ProjectBuilder {
     p2: Point
     storyStiffness?: number
     stories?: Record<string, number>
-    stiffness?: FrameStiffness
+    stiffness?: LooseFrameStiffness
     base?: BaseRef | string
     top?: string
     id?: string
@@ -221,7 +228,7 @@ export function projectBuilder(options: ProjectBuilderOptions = {}): ProjectBuil
     },
     frameLine(o) {
       const id = o.id ?? nextId('f')
-      const stiffness: FrameStiffness = o.stiffness ?? {
+      const stiffness: FrameStiffness = (o.stiffness as FrameStiffness | undefined) ?? {
         kind: 'direct',
         storyStiffness: o.storyStiffness ?? 1e8,
         ...(o.stories !== undefined ? { stories: o.stories } : {}),
