@@ -63,7 +63,7 @@ function floorsSection(result: AnalysisResult, units: UnitSystem): string {
   const centres = new Map((result.centres ?? []).map((c) => [c.floorId, c]))
   const L = (h: string, q: Quantity): string => `${h}${unitSuffix(q, units)}`
   const columns: Column[] = [
-    { header: 'floor', align: 'left' },
+    { header: 'floor' },
     { header: 'name', align: 'left' },
     { header: L('z', 'length') },
     { header: L('mass', 'mass') },
@@ -187,10 +187,13 @@ function torsionSection(t: StaticTorsionResult, result: AnalysisResult, units: U
       ])
     }
   }
+  const source =
+    t.eccentricitySource === 'criterion-set' ? ' (from the criterion set)' : t.eccentricitySource === 'settings' ? ' (from the settings)' : ''
   const lead = [
-    `Torsion check, equivalent static loads with accidental eccentricity ${pct(t.eccentricityFraction)} of the plan extent`,
+    `Torsion check, equivalent static loads with accidental eccentricity ${pct(t.eccentricityFraction)} of the plan extent${source}`,
     `  period used T_x ${formatNumber(t.periodUsed.x, 4)} s, T_y ${formatNumber(t.periodUsed.y, 4)} s; exponent k_x ${formatNumber(t.exponent.x, 3)}, k_y ${formatNumber(t.exponent.y, 3)}`,
     `  ${criterionHeader(c)}`,
+    ...(c.notes ?? []).map((n) => `  note: ${n}`),
   ]
   const extra = c.rows.filter((r) => !t.cases.some((lc) => lc.id === r.caseId))
   const tail = extra.length > 0 ? ['', checksTable(extra, result)] : []
@@ -234,6 +237,7 @@ function regularitySection(result: AnalysisResult): string {
   return [
     'Plan regularity',
     `  ${criterionHeader(r)}`,
+    ...(r.notes ?? []).map((n) => `  note: ${n}`),
     checksTable(r.rows, result),
     `Overall: ${verdictText(r.overall)} (${r.caution})`,
   ].join('\n')

@@ -1,0 +1,156 @@
+import { spawnSync } from 'node:child_process'
+import { readFileSync } from 'node:fs'
+import { fileURLToPath } from 'node:url'
+import { describe, expect, it } from 'vitest'
+import { EXIT_INVALID, EXIT_MECHANISM, EXIT_OK, runCli } from '@/cli/analyze'
+import type { CliIo } from '@/cli/analyze'
+import { CAUTION } from '@/model'
+
+const root = fileURLToPath(new URL('../../', import.meta.url))
+const example = (name: string): string => `${root}public/examples/${name}`
+
+/** In-process run with captured output; files come from disk unless `files` has them. */
+function run(argv: string[], files: Record<string, string> = {}): { code: number; out: string; err: string } {
+  let out = ''
+  let err = ''
+  const io: CliIo = {
+    out: (t) => (out += t),
+    err: (t) => (err += t),
+    readFile: (p) => files[p] ?? readFileSync(p, 'utf8'),
+  }
+  const code = runCli(argv, io)
+  return { code, out, err }
+}
+
+const boxText = readFileSync(example('eccentric-box.json'), 'utf8')
+
+describe('runCli', () => {
+  it('prints the usage and exits 0 for --help', () => {
+    const r = run(['--help'])
+    expect(r.code).toBe(EXIT_OK)
+    expect(r.out).toContain('usage: npm run analyze')
+  })
+
+  it('exits 1 with the usage for an unknown option', () => {
+    const r = run(['--colour'])
+    expect(r.code).toBe(EXIT_INVALID)
+    expect(r.err).toContain('[cli] unknown option --colour')
+    expect(r.out).toBe('')
+  })
+
+  it('exits 1 when the file cannot be read', () => {
+    const r = run(['/nonexistent/model.json'])
+    expect(r.code).toBe(EXIT_INVALID)
+    expect(r.err).toMatch(/^\[file\] cannot read \/nonexistent\/model\.json: /)
+  })
+
+  it('exits 1 for text that is not JSON', () => {
+    const r = run(['m.json'], { 'm.json': '{ "format": ' })
+    expect(r.code).toBe(EXIT_INVALID)
+    expect(r.err).toContain('(file): not valid JSON')
+  })
+
+  it('exits 1 for an invalid model and prints each path-naming error on its own line', () => {
+    const doc = JSON.parse(boxText) as {
+      floors: { height: unknown }[]
+      frameLines: { west: { stiffness: { storyStiffness: unknown } } }
+      slabs: { deck: { floor: unknown } }
+    }
+    doc.floors[0]!.height = -3
+    doc.frameLines.west.stiffness.storyStiffness = 'stiff'
+    doc.slabs.deck.floor = 'F9'
+    const r = run(['bad.json'], { 'bad.json': JSON.stringify(doc) })
+    expect(r.code).toBe(EXIT_INVALID)
+    expect(r.out).toBe('')
+    expect(r.err.split('\n')).toEqual([
+      '[file] bad.json is not a valid Gyre project (3 problems):',
+      'floors[0].height: must be > 0, got -3',
+      'slabs.deck.floor: no floor "F9"',
+      'frameLines.west.stiffness.storyStiffness: must be a finite number, got "stiff"',
+      '',
+    ])
+  })
+
+  it('exits 1 for a file of a newer version, saying to update', () => {
+    const r = run(['new.json'], { 'new.json': boxText.replace('"version": 1', '"version": 7') })
+    expect(r.code).toBe(EXIT_INVALID)
+    expect(r.err).toContain('version 7 is newer than this Gyre (reads up to 1): update Gyre')
+  })
+
+  it('exits 2 for a mechanism and names the floor and the direction on stderr', () => {
+    const r = run([example('mechanism-x.json')])
+    expect(r.code).toBe(EXIT_MECHANISM)
+    expect(r.err).toContain('the structure is a mechanism')
+    const line = r.err.split('\n').find((l) => l.startsWith('error mechanism:'))
+    expect(line).toBeDefined()
+    expect(line).toMatch(/F1/)
+    expect(line).toMatch(/\bx\b/)
+    expect(r.out).toContain(`CAUTION: ${CAUTION}`)
+    expect(r.out).not.toMatch(/NaN/)
+  })
+
+  it('exits 0 on the demo building and shows the caution before and after the numbers', () => {
+    const r = run([])
+    expect(r.err).toBe('')
+    expect(r.code).toBe(EXIT_OK)
+    const lines = r.out.trimEnd().split('\n')
+    expect(lines[0]).toBe('Gyre analysis: Corner Block, Quarry Street')
+    expect(lines[1]).toBe(`CAUTION: ${CAUTION}`)
+    expect(lines[lines.length - 1]).toBe(`CAUTION: ${CAUTION}`)
+    for (const part of ['Floors', 'Modes (21 of 21', 'Torsion check', 'Criterion set:', 'Response spectrum']) {
+      expect(r.out).toContain(part)
+    }
+    expect(r.out).not.toMatch(/NaN|Infinity/)
+  })
+
+  it('prints the eccentric box JSON with the hand-calculated centres (--json)', () => {
+    const r = run([example('eccentric-box.json'), '--json'])
+    expect(r.code).toBe(EXIT_OK)
+    const result = JSON.parse(r.out) as {
+      caution: string
+      floors: { mass: number; centreOfMass: { x: number; y: number }; radiusOfGyration: number }[]
+      centres: {
+        centreOfRigidity: { x: number; y: number }
+        eccentricity: { x: number; y: number }
+        torsionalRadius: { x: number; y: number }
+      }[]
+      modes: { periods: number[] }
+    }
+    expect(result.caution).toBe(CAUTION)
+    const floor = result.floors[0]!
+    const c = result.centres[0]!
+    // Hand calculation (eccentric-box.json notes): m = 600 kg/m² x 60 m² = 36 000 kg, CM at the centroid (5, 3)
+    expect(floor.mass).toBeCloseTo(36000, 6)
+    expect(floor.centreOfMass.x).toBeCloseTo(5, 9)
+    // Rectangle polar radius of gyration l_s = sqrt((a² + b²)/12) (handbook closed form) = sqrt(136/12) m
+    expect(floor.radiusOfGyration).toBeCloseTo(Math.sqrt(136 / 12), 9)
+    // One-storey shear building: CR = stiffness-weighted mean of the line positions, x = (0 k1 + 10 k2)/(k1 + k2)
+    expect(c.centreOfRigidity.x).toBeCloseTo(10 / 3, 9)
+    expect(c.centreOfRigidity.y).toBeCloseTo(3, 9)
+    expect(c.eccentricity.x).toBeCloseTo(10 / 3 - 5, 9)
+    // K_theta = sum k d² about CR = 200e6 (10/3)² + 100e6 (20/3)² + 2 150e6 3² ; r = sqrt(K_theta / 300e6)
+    const Ktheta = 200e6 * (10 / 3) ** 2 + 100e6 * (20 / 3) ** 2 + 2 * 150e6 * 9
+    expect(c.torsionalRadius.x).toBeCloseTo(Math.sqrt(Ktheta / 300e6), 6)
+    expect(c.torsionalRadius.y).toBeCloseTo(Math.sqrt(Ktheta / 300e6), 6)
+    expect(Array.isArray(result.modes.periods)).toBe(true)
+    expect(result.modes.periods).toHaveLength(3)
+  })
+})
+
+describe('the analyze script (node process)', () => {
+  const tsx = `${root}node_modules/.bin/tsx`
+  const script = `${root}src/cli/analyze.ts`
+
+  it('exits 1 and writes the errors on stderr for an invalid model', () => {
+    const p = spawnSync(tsx, [script, `${root}test/fixtures/does-not-exist.json`], { encoding: 'utf8', cwd: root })
+    expect(p.status).toBe(EXIT_INVALID)
+    expect(p.stderr).toContain('[file] cannot read')
+    expect(p.stdout).toBe('')
+  })
+
+  it('exits 2 for the mechanism example', () => {
+    const p = spawnSync(tsx, [script, example('mechanism-x.json')], { encoding: 'utf8', cwd: root })
+    expect(p.status).toBe(EXIT_MECHANISM)
+    expect(p.stderr).toContain('error mechanism:')
+  })
+})
