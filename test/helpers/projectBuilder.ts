@@ -313,3 +313,47 @@ export function projectBuilder(options: ProjectBuilderOptions = {}): ProjectBuil
   }
   return builder
 }
+
+/**
+ * METHODS.md §8 self-derived one-storey case: plan 20 m x 10 m, m = 100 t uniform (500 kg/m²),
+ * k = 1e5 kN/m; walls as direct-stiffness frame lines: y-walls 2k at x = 0 and k at x = 20, x-walls k
+ * at y = 0 and y = 10. `shift` translates the whole model.
+ */
+export function eccentricOneStorey(shift = { x: 0, y: 0 }): Project {
+  const k = 1e8 // 1e5 kN/m
+  const P = (x: number, y: number) => ({ x: x + shift.x, y: y + shift.y })
+  return projectBuilder({ floors: 1, height: 3 })
+    .rectSlab({ x: shift.x, y: shift.y, width: 20, depth: 10, areaMass: 500 })
+    .frameLine({ id: 'yw0', p1: P(0, 0), p2: P(0, 10), storyStiffness: 2 * k })
+    .frameLine({ id: 'yw20', p1: P(20, 0), p2: P(20, 10), storyStiffness: k })
+    .frameLine({ id: 'xw0', p1: P(0, 0), p2: P(20, 0), storyStiffness: k })
+    .frameLine({ id: 'xw10', p1: P(0, 10), p2: P(20, 10), storyStiffness: k })
+    .build()
+}
+
+/** A small mixed 4-floor model: walls (one standing on L2), frames of each kind, skewed columns, an opening. */
+export function mixedModel(shift = { x: 0, y: 0 }): Project {
+  const P = (x: number, y: number) => ({ x: x + shift.x, y: y + shift.y })
+  return projectBuilder({ floors: [{ height: 4.5 }, { height: 3.2 }, { height: 3.2 }, { height: 3.0 }] })
+    .rectSlab({ x: shift.x, y: shift.y, width: 24, depth: 14, areaMass: 650, openings: [{ x: 2 + shift.x, y: 9 + shift.y, width: 3, depth: 3 }] })
+    .pointMass({ at: P(20, 3), mass: 8000, floor: 'L4' })
+    .wall({ id: 'w1', p1: P(1, 8), p2: P(1, 13), thickness: 0.3, stories: { L4: { thickness: 0.2 } } })
+    .wall({ id: 'w2', p1: P(1, 13), p2: P(7, 13), flexureFactor: 0.7 })
+    .wall({ id: 'w3', p1: P(23, 2), p2: P(21, 6), base: 'L2' })
+    .frameLine({
+      id: 'f1',
+      p1: P(0, 0),
+      p2: P(24, 0),
+      stiffness: { kind: 'moment', bays: 4, bayWidth: 6, columnI: 0.0108, beamI: 0.0114, material: 'concrete' },
+    })
+    .frameLine({
+      id: 'f2',
+      p1: P(24, 0),
+      p2: P(24, 14),
+      stiffness: { kind: 'braced', braces: 2, bayWidth: 6, braceArea: 4e-3, material: 'steel' },
+      top: 'L3',
+    })
+    .column({ id: 'c1', at: P(12, 7), angle: 0.4, Ix: 0.008, Iy: 0.003 })
+    .column({ id: 'c2', at: P(6, 4), fixity: 'pinned', stiffnessFactor: 0.7, base: 'L1', top: 'L3' })
+    .build()
+}
