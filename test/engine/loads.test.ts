@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { CAUTION } from '@/model'
 import type { AnalysisSettings } from '@/model'
+import { analyzeProject } from '@/engine'
 import { resolveCriterionSet } from '@/engine/criteria'
 import {
   dominantPeriod,
@@ -18,6 +19,8 @@ import {
   oneStoreyEccentric,
   shearElement,
 } from './torsionFixtures'
+import { generateBuilding, transformProject } from '../helpers/generateBuilding'
+import { projectBuilder } from '../helpers/projectBuilder'
 
 const settings = (over: Partial<AnalysisSettings> = {}): AnalysisSettings => ({
   criterionSet: 'asce7-16',
@@ -217,5 +220,92 @@ describe('runStaticTorsion', () => {
     let best = 0
     for (let m = 1; m < mm.count; m++) if (mm.effectiveMassRatio.x[m]! > mm.effectiveMassRatio.x[best]!) best = m
     expect(r.periodUsed.x).toBeCloseTo(mm.periods[best]!, 12)
+  })
+})
+
+describe('runStaticTorsion through analyzeProject', () => {
+  // METHODS.md §8 one-storey case built as a project: frame lines with direct story stiffness
+  const k = 1e8
+  const project = (criterionSet: string, dx = 0, dy = 0) =>
+    projectBuilder({ floors: 1 })
+      .rectSlab({ x: dx, y: dy, width: 20, depth: 10, areaMass: 1e5 / 200 })
+      .frameLine({ p1: { x: dx, y: dy }, p2: { x: dx, y: dy + 10 }, storyStiffness: 2 * k })
+      .frameLine({ p1: { x: dx + 20, y: dy }, p2: { x: dx + 20, y: dy + 10 }, storyStiffness: k })
+      .frameLine({ p1: { x: dx, y: dy }, p2: { x: dx + 20, y: dy }, storyStiffness: k })
+      .frameLine({ p1: { x: dx, y: dy + 10 }, p2: { x: dx + 20, y: dy + 10 }, storyStiffness: k })
+      .settings({ criterionSet })
+      .build()
+
+  it('reproduces the ratios 1.36111 / 1.20588, Type 1a and Ax = 1.28654 (ASCE 7-16)', () => {
+    const r = analyzeProject(project('asce7-16'), { spectrum: false })
+    expect(r.status).toBe('ok')
+    const t = r.torsion!
+    // METHODS.md §8 (derived); ASCE/SEI 7-16 Table 12.3-1 and Eq. 12.8-14
+    expect(caseOf(t, 'Y+e').stories[0]!.driftRatio).toBeCloseTo(1.36111, 5)
+    expect(caseOf(t, 'Y-e').stories[0]!.driftRatio).toBeCloseTo(1.20588, 5)
+    expect(caseOf(t, 'Y+e').stories[0]!.amplification!).toBeCloseTo(1.28654, 5)
+    expect(t.criterion.overall).toBe('fail')
+    expect(t.criterion.caution).toBe(CAUTION)
+    expect(r.regularity).toBeNull()
+  })
+
+  it('fails EN 1998-1 Eq. 4.1a and passes Eq. 4.1b', () => {
+    const r = analyzeProject(project('en1998-1', 35, -12), { spectrum: false })
+    const rows = r.regularity!.rows
+    // METHODS.md §8 (derived): e0x = 3.3333 > 0.30 r_x = 3.0822; r_x = 10.274 >= l_s = 6.455
+    const a = rows.find((w) => w.caseId === 'x' && w.clause.includes('4.1a'))!
+    const b = rows.find((w) => w.caseId === 'x' && w.clause.includes('4.1b'))!
+    expect(a.value).toBeCloseTo(3.33333, 4)
+    expect(a.limit).toBeCloseTo(3.0822, 3)
+    expect(a.verdict).toBe('fail')
+    expect(b.value).toBeCloseTo(10.274, 3)
+    expect(b.verdict).toBe('pass')
+    expect(r.regularity!.caution).toBe(CAUTION)
+    // the plan shift by (35, -12) does not change the static ratios (MODELING.md)
+    expect(caseOf(r.torsion!, 'Y+e').stories[0]!.driftRatio).toBeCloseTo(1.36111, 5)
+  })
+
+  it('reports an unknown criterion set as an issue and still computes the ratios', () => {
+    const r = analyzeProject(project('no-such-set'), { spectrum: false })
+    expect(r.issues.map((i) => i.code)).toContain('criterion-unknown')
+    expect(r.torsion!.criterion.overall).toBe('not-applicable')
+    expect(caseOf(r.torsion!, 'Y-e').stories[0]!.driftRatio).toBeCloseTo(1.20588, 5)
+  })
+})
+
+describe('runStaticTorsion on generated buildings', () => {
+  it('keeps drift ratios when the spectrum (and so the base shear) is scaled', () => {
+    // MODELING.md: the absolute base shear does not change the ratios (linear elastic)
+    const p = generateBuilding({ floors: 12, seed: 5 })
+    const a = analyzeProject(p, { spectrum: false })
+    const b = analyzeProject(
+      { ...p, settings: { ...p.settings, spectrum: { kind: 'asce7', SDS: 2.2, SD1: 1.3, TL: 8 } } },
+      { spectrum: false },
+    )
+    expect(a.status).toBe('ok')
+    const ta = a.torsion!
+    const tb = b.torsion!
+    expect(tb.baseShear.x / ta.baseShear.x).not.toBeCloseTo(1, 2)
+    ta.cases.forEach((c, ci) =>
+      c.stories.forEach((row, i) => {
+        const o = tb.cases[ci]!.stories[i]!
+        expect(o.driftRatio).toBeCloseTo(row.driftRatio, 9)
+        expect(o.displacementRatio).toBeCloseTo(row.displacementRatio, 9)
+      }),
+    )
+  })
+
+  it('keeps drift ratios when the plan is moved', () => {
+    // MODELING.md: nothing shown to the user depends on where O lies
+    const p = generateBuilding({ floors: 8, seed: 11 })
+    const q = transformProject(p, { dx: 250, dy: -90, angle: 0 })
+    const a = analyzeProject(p, { spectrum: false }).torsion!
+    const b = analyzeProject(q, { spectrum: false }).torsion!
+    a.cases.forEach((c, ci) =>
+      c.stories.forEach((row, i) => {
+        expect(b.cases[ci]!.stories[i]!.driftRatio).toBeCloseTo(row.driftRatio, 7)
+        expect(b.cases[ci]!.stories[i]!.driftMax / row.driftMax).toBeCloseTo(1, 7)
+      }),
+    )
   })
 })

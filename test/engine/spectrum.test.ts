@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import type { AnalysisSettings } from '@/model'
+import { analyzeProject } from '@/engine'
 import { cqcCorrelationEqual } from '@/engine/cqc'
 import { combineDirections, runSpectrum } from '@/engine/spectrum'
 import {
@@ -12,6 +13,8 @@ import {
 } from '@/engine/spectra'
 import { pointDisplacement } from '@/engine/loads'
 import { buildTestStructure, denseModes, multiStoreyEccentric, oneStoreyEccentric, shearElement } from './torsionFixtures'
+import { generateBuilding, transformProject } from '../helpers/generateBuilding'
+import { projectBuilder } from '../helpers/projectBuilder'
 
 const settings = (over: Partial<AnalysisSettings> = {}): AnalysisSettings => ({
   criterionSet: 'asce7-16',
@@ -198,5 +201,48 @@ describe('runSpectrum', () => {
       expect(b.displacementCqc.x / a.displacementCqc.x).toBeCloseTo(1, 7)
       expect(b.driftMaxCqc.y / a.driftMaxCqc.y).toBeCloseTo(1, 7)
     }
+  })
+})
+
+describe('runSpectrum through analyzeProject', () => {
+  it('reproduces the CQC base shear of the one-storey eccentric project', () => {
+    const k = 1e8
+    const p = projectBuilder({ floors: 1 })
+      .rectSlab({ width: 20, depth: 10, areaMass: 500 })
+      .frameLine({ p1: { x: 0, y: 0 }, p2: { x: 0, y: 10 }, storyStiffness: 2 * k })
+      .frameLine({ p1: { x: 20, y: 0 }, p2: { x: 20, y: 10 }, storyStiffness: k })
+      .frameLine({ p1: { x: 0, y: 0 }, p2: { x: 20, y: 0 }, storyStiffness: k })
+      .frameLine({ p1: { x: 0, y: 10 }, p2: { x: 20, y: 10 }, storyStiffness: k })
+      .build()
+    const r = analyzeProject(p).spectrum!
+    // METHODS.md §8 modes (derived) with ASCE 7-16 11.4.6 ordinates and the Der Kiureghian rho
+    const w = [50.8638, 93.8769]
+    const meff = [0.93368, 0.06632]
+    const V = w.map((wi, i) => meff[i]! * 1e5 * asce7Ordinate(1, 0.6, 8, (2 * Math.PI) / wi) * GRAVITY)
+    const rho = cqcCorrelationEqual(w[1]! / w[0]!, 0.05)
+    expect(r.baseShear.y.cqc / Math.sqrt(V[0]! ** 2 + V[1]! ** 2 + 2 * rho * V[0]! * V[1]!)).toBeCloseTo(1, 4)
+  })
+
+  it('scales linearly with the spectrum and does not depend on the plan origin', () => {
+    const g = generateBuilding({ floors: 10, seed: 21 })
+    const p = { ...g, settings: { ...g.settings, spectrum: { kind: 'asce7' as const, SDS: 1, SD1: 0.6, TL: 8 } } }
+    const a = analyzeProject(p).spectrum!
+    // same shape, doubled ordinates (SDS 2, SD1 1.2 keep T0 and Ts): every response doubles (linearity)
+    const doubled = analyzeProject({
+      ...p,
+      settings: { ...p.settings, spectrum: { kind: 'asce7', SDS: 2.0, SD1: 1.2, TL: 8 } },
+    }).spectrum!
+    expect(doubled.baseShear.x.cqc / a.baseShear.x.cqc).toBeCloseTo(2, 9)
+    expect(doubled.combined[4]!.driftMaxCqc.y / a.combined[4]!.driftMaxCqc.y).toBeCloseTo(2, 9)
+    const zero = { ...p, settings: { ...p.settings, spectrum: { kind: 'table' as const, points: [[0, 0], [100, 0]] as [number, number][] } } }
+    // a zero spectrum gives zero response (closed form)
+    expect(analyzeProject(zero).spectrum!.baseShear.x.cqc).toBeCloseTo(0, 9)
+    const moved = analyzeProject(transformProject(p, { dx: -40, dy: 75, angle: 0 })).spectrum!
+    a.combined.forEach((f, i) => {
+      const g = moved.combined[i]!
+      expect(g.driftMaxCqc.x / f.driftMaxCqc.x).toBeCloseTo(1, 6)
+      expect(g.displacementCqc.y / f.displacementCqc.y).toBeCloseTo(1, 6)
+      expect(g.storyShearCqc.x / f.storyShearCqc.x).toBeCloseTo(1, 6)
+    })
   })
 })

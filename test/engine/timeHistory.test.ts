@@ -1,9 +1,12 @@
 import { describe, expect, it } from 'vitest'
 import type { AnalysisSettings } from '@/model'
+import { analyzeProject } from '@/engine'
 import { DEFAULT_DEMO_MOTION, generateDemoMotion, groundMotionFromSpec } from '@/engine/groundMotion'
 import { GRAVITY } from '@/engine/spectra'
 import { MAX_OUTPUT_STEPS, newmarkSdof, runTimeHistory } from '@/engine/timeHistory'
 import { buildTestStructure, denseModes, oneStoreyEccentric, shearElement } from './torsionFixtures'
+import { generateBuilding } from '../helpers/generateBuilding'
+import { projectBuilder } from '../helpers/projectBuilder'
 
 const settings = (over: Partial<AnalysisSettings> = {}): AnalysisSettings => ({
   criterionSet: 'asce7-16',
@@ -212,5 +215,44 @@ describe('runTimeHistory', () => {
     }
     expect(r.peaks[0]!.y).toBeLessThanOrEqual(bound * (1 + 1e-12))
     expect(r.peaks[0]!.y).toBeGreaterThan(0.3 * bound)
+  })
+})
+
+describe('runTimeHistory through analyzeProject', () => {
+  it('matches the closed-form pulse peak for a symmetric one-storey project', () => {
+    const k = 1e7
+    const dt = 0.002
+    const td = 0.4
+    const A = 0.25 * GRAVITY
+    const n = Math.round(4 / dt) + 1
+    const ay = Array.from({ length: n }, (_, s) => (s * dt < td ? A * Math.sin((Math.PI * s * dt) / td) : 0))
+    const p = projectBuilder({ floors: 1 })
+      .rectSlab({ width: 20, depth: 10, areaMass: 500 })
+      .frameLine({ p1: { x: 0, y: 0 }, p2: { x: 0, y: 10 }, storyStiffness: k })
+      .frameLine({ p1: { x: 20, y: 0 }, p2: { x: 20, y: 10 }, storyStiffness: k })
+      .frameLine({ p1: { x: 0, y: 0 }, p2: { x: 20, y: 0 }, storyStiffness: k })
+      .frameLine({ p1: { x: 0, y: 10 }, p2: { x: 20, y: 10 }, storyStiffness: k })
+      .settings({ damping: 0, groundMotion: { kind: 'record', name: 'half-sine pulse', dt, ax: [], ay } })
+      .build()
+    const r = analyzeProject(p, { spectrum: false, timeHistory: true }).timeHistory!
+    // Chopra §4.8 closed form (from memory): omega = sqrt(2k/m)
+    expect(r.peaks[0]!.y / halfSinePeak(Math.sqrt((2 * k) / 1e5), A, td)).toBeCloseTo(1, 3)
+    expect(r.peaks[0]!.x).toBeCloseTo(0, 9)
+    expect(r.groundMotionName).toBe('half-sine pulse')
+  })
+
+  it('runs the generated demo motion on a generated building deterministically', () => {
+    const p = generateBuilding({ floors: 15, seed: 4 })
+    const withMotion = {
+      ...p,
+      settings: { ...p.settings, groundMotion: { kind: 'generated' as const, pga: 0.2, duration: 12, seed: 5, yFactor: 0.4 } },
+    }
+    const a = analyzeProject(withMotion, { spectrum: false, timeHistory: true }).timeHistory!
+    const b = analyzeProject(withMotion, { spectrum: false, timeHistory: true }).timeHistory!
+    expect(a.synthetic).toBe(true)
+    expect(a.peaks.map((f) => f.x)).toEqual(b.peaks.map((f) => f.x))
+    // peaks grow up the building for a cantilever-like lateral system (common practice)
+    expect(a.peaks[14]!.x).toBeGreaterThan(a.peaks[0]!.x)
+    for (const f of a.peaks) expect(Number.isFinite(f.x) && Number.isFinite(f.rotation)).toBe(true)
   })
 })
