@@ -1,0 +1,5 @@
+import { polylineIdle } from '../polyline'
+import { openingSpec } from './spec'
+
+/** Waiting for the first vertex of an opening. */
+export const OpeningIdle = polylineIdle(openingSpec)
