@@ -1,7 +1,7 @@
 /**
  * Ground motions for the time history: an imported record, or Gyre's own generated demo motion.
- * The demo motion is INVENTED for demonstrations (a windowed sum of sines with seeded random phases);
- * it is not a recorded earthquake and not a design motion.
+ * The demo motion is INVENTED for demonstrations (a windowed sum of sines with seeded random
+ * phases); it is not a recorded earthquake and not a design motion.
  */
 import type { GroundMotionSpec } from '@/model'
 import { GRAVITY } from './spectra'
@@ -46,17 +46,21 @@ export function seededRandom(seed: number): () => number {
 /**
  * Gyre's demo motion (our own recipe, for demonstrations only):
  * a(t) = e(t) sum_k w_k sin(2 pi f_k t + phi_k), 48 components with frequencies spread
- * log-uniformly over 0.3-12 Hz (seeded jitter), weights a bell on log frequency centred at 2.5 Hz,
- * phases uniform from the seed; e(t) rises as sin² over the first 15 % of the duration, holds to 45 %,
- * then decays exponentially to about 5 % at the end. Scaled so max |a_x| = pga g; a_y = yFactor a_x
- * (the type's "share of the X motion applied in Y").
+ * log-uniformly over 0.3-12 Hz (seeded jitter), weights a bell on log frequency centred at
+ * 2.5 Hz, phases uniform from the seed; e(t) rises as sin² over the first 15 % of the duration,
+ * holds to 45 %, then decays exponentially to about 5 % at the end. Scaled so max |a_x| = pga g;
+ * a_y = yFactor a_x (the type's "share of the X motion applied in Y").
  */
 export function generateDemoMotion(
   spec: Extract<GroundMotionSpec, { kind: 'generated' }>,
   dt = DEMO_MOTION_DT,
 ): GroundMotion {
-  if (!(spec.duration > 0)) throw new RangeError(`[engine] groundMotion.duration: must be > 0 (got ${spec.duration})`)
-  if (!(spec.pga >= 0)) throw new RangeError(`[engine] groundMotion.pga: must be >= 0 (got ${spec.pga})`)
+  if (!(spec.duration > 0)) {
+    throw new RangeError(`[engine] groundMotion.duration: must be > 0 (got ${spec.duration})`)
+  }
+  if (!(spec.pga >= 0)) {
+    throw new RangeError(`[engine] groundMotion.pga: must be >= 0 (got ${spec.pga})`)
+  }
   const rand = seededRandom(spec.seed)
   const K = 48
   const fLo = 0.3
@@ -74,7 +78,12 @@ export function generateDemoMotion(
   let peak = 0
   for (let s = 0; s < steps; s++) {
     const t = s * dt
-    const e = t < t1 ? Math.sin((0.5 * Math.PI * t) / t1) ** 2 : t <= t2 ? 1 : Math.exp((-3 * (t - t2)) / (T - t2))
+    const e =
+      t < t1
+        ? Math.sin((0.5 * Math.PI * t) / t1) ** 2
+        : t <= t2
+          ? 1
+          : Math.exp((-3 * (t - t2)) / (T - t2))
     let a = 0
     for (const c of comps) a += c.w * Math.sin(c.omega * t + c.phi)
     ax[s] = e * a
@@ -84,7 +93,9 @@ export function generateDemoMotion(
   for (let s = 0; s < steps; s++) ax[s]! *= scale
   const ay = ax.map((v) => v * spec.yFactor)
   return {
-    name: `Synthetic demo motion (invented; seed ${spec.seed}, PGA ${spec.pga.toFixed(2)} g, ${spec.duration} s)`,
+    name:
+      `Synthetic demo motion (invented; seed ${spec.seed}, ` +
+      `PGA ${spec.pga.toFixed(2)} g, ${spec.duration} s)`,
     dt,
     ax,
     ay,

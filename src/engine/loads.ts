@@ -1,7 +1,7 @@
 /**
- * Equivalent static loads with accidental torsion: floor forces ∝ w_i z_i^k, four cases X±e, Y±e,
- * story drifts and floor displacements at the extreme points, their max/avg ratios, the drift index,
- * amplification where the criterion set defines one, and the criterion evaluation.
+ * Equivalent static loads with accidental torsion: floor forces ∝ w_i z_i^k, four cases X±e,
+ * Y±e, story drifts and floor displacements at the extreme points, their max/avg ratios, the drift
+ * index, amplification where the criterion set defines one, and the criterion evaluation.
  * @see MODELING.md "Equivalent static loads with accidental torsion"; ASCE/SEI 7-16 12.8.3 (k)
  */
 import type { AnalysisSettings, CriterionSetSpec, Point } from '@/model'
@@ -50,8 +50,8 @@ export function dominantPeriod(modes: ModalResult, direction: Direction): number
 }
 
 /**
- * Displacement along `direction` of a plan point of floor `floorIndex` (0-based) from the global vector
- * at O: u_x - theta*y or u_y + theta*x, m. Floor -1 is the base (0).
+ * Displacement along `direction` of a plan point of floor `floorIndex` (0-based) from the global
+ * vector at O: u_x - theta*y or u_y + theta*x, m. Floor -1 is the base (0).
  */
 export function pointDisplacement(
   u: ArrayLike<number>,
@@ -78,16 +78,22 @@ export function extremePointDrifts(
   const pts = structure.floors[floorIndex]!.extremePoints
   const out = new Float64Array(pts.length)
   pts.forEach((p, k) => {
-    out[k] = pointDisplacement(u, floorIndex, p, direction) - pointDisplacement(u, floorIndex - 1, p, direction)
+    out[k] =
+      pointDisplacement(u, floorIndex, p, direction) -
+      pointDisplacement(u, floorIndex - 1, p, direction)
   })
   return out
 }
 
 /**
- * Indices of the extreme points at the two ends across a load along `direction`: the points of least
- * and of greatest coordinate perpendicular to it (ties within 1e-9 of the extent all belong to the end).
+ * Indices of the extreme points at the two ends across a load along `direction`: the points of
+ * least and of greatest coordinate perpendicular to it (ties within 1e-9 of the extent all belong
+ * to the end).
  */
-export function endPointGroups(floor: FloorProps, direction: Direction): { low: number[]; high: number[] } {
+export function endPointGroups(
+  floor: FloorProps,
+  direction: Direction,
+): { low: number[]; high: number[] } {
   const coord = (p: Point): number => (direction === 'x' ? p.y : p.x)
   const pts = floor.extremePoints
   if (pts.length === 0) return { low: [], high: [] }
@@ -107,8 +113,11 @@ export function endPointGroups(floor: FloorProps, direction: Direction): { low: 
   return { low, high }
 }
 
-/** Largest value, mean of the two end means, and their ratio (∞ when the mean vanishes, 1 if all 0). */
-function maxAvg(values: Float64Array, ends: { low: number[]; high: number[] }): [number, number, number] {
+/** Largest value, mean of the two end means, their ratio (∞ if the mean is 0, 1 if all are 0). */
+function maxAvg(
+  values: Float64Array,
+  ends: { low: number[]; high: number[] },
+): [number, number, number] {
   if (values.length === 0) return [0, 0, 1]
   let max = -Infinity
   let scale = 0
@@ -143,7 +152,9 @@ export function storyTorsionRows(
     })
     const [driftMax, driftAvg, driftRatio] = maxAvg(drifts, ends)
     const [displacementMax, displacementAvg, displacementRatio] = maxAvg(disp, ends)
-    const amplification = set?.amplification ? amplificationFactor(displacementRatio, set.amplification) : null
+    const amplification = set?.amplification
+      ? amplificationFactor(displacementRatio, set.amplification)
+      : null
     return {
       floorId: floor.id,
       index: i,
@@ -160,8 +171,8 @@ export function storyTorsionRows(
 }
 
 /**
- * Accidental eccentricity fraction: the criterion set's own value when it prescribes one (its checks
- * are calibrated on it), otherwise `settings.accidentalEccentricity`.
+ * Accidental eccentricity fraction: the criterion set's own value when it prescribes one (its
+ * checks are calibrated on it), otherwise `settings.accidentalEccentricity`.
  */
 export function eccentricityFraction(
   settings: AnalysisSettings,
@@ -181,11 +192,18 @@ const CASES: readonly { id: StaticCaseId; direction: Direction; sign: 1 | -1 }[]
 ]
 
 /**
- * Floor forces F_i = V w_i z_i^k / sum_j w_j z_j^k along one direction, N (w_i = m_i g, z_i elevation).
+ * Floor forces F_i = V w_i z_i^k / sum_j w_j z_j^k along one direction, N (w_i = m_i g, z_i the
+ * elevation).
  * @see ASCE/SEI 7-16 12.8.3, Eqs 12.8-11/12.8-12 (METHODS.md §1)
  */
-export function verticalDistribution(structure: Structure, baseShear: number, exponent: number): Float64Array {
-  const weights = structure.floors.map((f) => f.mass * GRAVITY * Math.max(0, f.elevation) ** exponent)
+export function verticalDistribution(
+  structure: Structure,
+  baseShear: number,
+  exponent: number,
+): Float64Array {
+  const weights = structure.floors.map(
+    (f) => f.mass * GRAVITY * Math.max(0, f.elevation) ** exponent,
+  )
   const total = weights.reduce((a, b) => a + b, 0)
   return Float64Array.from(weights, (w) => (total > 0 ? (baseShear * w) / total : 0))
 }
@@ -209,7 +227,8 @@ export function runStaticTorsion(
   const n = structure.floorCount
   const { fraction, source } = eccentricityFraction(settings, set)
   const W = structure.totalMass * GRAVITY
-  const perDir = (d: Direction): { T: number; k: number; C: number; V: number; forces: Float64Array } => {
+  type DirectionLoads = { T: number; k: number; C: number; V: number; forces: Float64Array }
+  const perDir = (d: Direction): DirectionLoads => {
     const T = dominantPeriod(modes, d)
     const k = verticalDistributionExponent(T)
     const sa = spectralAcceleration(settings.spectrum, T, settings.damping)
@@ -252,7 +271,9 @@ export function runStaticTorsion(
     }
   })
 
-  const inputs: TorsionCheckInput[] = cases.flatMap((c) => c.stories.map((row) => ({ caseId: c.id, row })))
+  const inputs: TorsionCheckInput[] = cases.flatMap((c) =>
+    c.stories.map((row) => ({ caseId: c.id, row })),
+  )
   const criterion = buildEvaluation(set, set ? torsionCheckRows(set, inputs) : [])
   return {
     periodUsed: { x: dirs.x.T, y: dirs.y.T },

@@ -1,5 +1,6 @@
 /**
- * Design spectrum ordinates (spectral acceleration in g) for the spectrum kinds of the project model.
+ * Design spectrum ordinates (spectral acceleration in g) for the spectrum kinds of the project
+ * model.
  * Pure functions; periods in s, damping ratios as fractions (0.05 = 5 %).
  */
 import type { SpectrumSpec } from '@/model'
@@ -73,7 +74,10 @@ export function en1998Ordinate(
  * Tabulated spectrum: linear interpolation between (period, Sa) pairs sorted by period, flat beyond
  * the first and last points. No damping correction.
  */
-export function tableOrdinate(points: readonly (readonly [number, number])[], periodS: number): number {
+export function tableOrdinate(
+  points: readonly (readonly [number, number])[],
+  periodS: number,
+): number {
   const n = points.length
   if (n === 0) throw new RangeError('[engine] table spectrum: at least one point required')
   const first = points[0]!
@@ -96,7 +100,11 @@ export function tableOrdinate(points: readonly (readonly [number, number])[], pe
  * Spectral acceleration of a design spectrum at a period, in g.
  * @param dampingRatio used by the EN 1998-1 shape only (eta); ASCE 7 and tables are taken as given
  */
-export function spectralAcceleration(spec: SpectrumSpec, periodS: number, dampingRatio: number): number {
+export function spectralAcceleration(
+  spec: SpectrumSpec,
+  periodS: number,
+  dampingRatio: number,
+): number {
   switch (spec.kind) {
     case 'asce7':
       return asce7Ordinate(spec.SDS, spec.SD1, spec.TL, periodS)

@@ -1,6 +1,7 @@
 /**
- * Response spectrum analysis: modal peak responses from a design spectrum, combined over modes by CQC
- * (SRSS beside it) and over the two horizontal excitation directions by SRSS or the 100/30 rule.
+ * Response spectrum analysis: modal peak responses from a design spectrum, combined over modes by
+ * CQC (SRSS beside it) and over the two horizontal excitation directions by SRSS or the 100/30
+ * rule.
  * Differences (story drifts at the extreme points) are formed in each mode before combining.
  * All modes of the modal result are combined; the rising branch below T0 is kept; no base-shear
  * scaling unless `settings.baseShearTarget` is given.
@@ -16,7 +17,7 @@ export { spectralAcceleration } from './spectra'
 
 type Dir = 'x' | 'y'
 
-/** Combined peak values of one floor under one excitation direction (before direction combination). */
+/** Combined peak values of one floor under one excitation direction (directions not combined). */
 interface FloorPeaks {
   readonly dispCqc: [number, number, number]
   readonly dispSrss: [number, number, number]
@@ -32,8 +33,8 @@ export function combineDirections(a: number, b: number, rule: 'srss' | '100-30')
 }
 
 /**
- * Modal peak displacement vectors for excitation along one direction: u_m = Gamma_m Sa_m g / omega_m²
- * phi_m (global order at O), mode-major count x dofCount, m and rad.
+ * Modal peak displacement vectors for excitation along one direction:
+ * u_m = Gamma_m Sa_m g / omega_m² phi_m (global order at O), mode-major count x dofCount, m, rad.
  */
 export function modalPeakDisplacements(
   modes: ModalResult,
@@ -94,7 +95,9 @@ function floorPeaks(
     const driftModal = { x: new Float64Array(count * P), y: new Float64Array(count * P) }
     for (let m = 0; m < count; m++) {
       const um = u.subarray(m * n, (m + 1) * n)
-      for (const d of ['x', 'y'] as const) driftModal[d].set(extremePointDrifts(structure, um, f, d), m * P)
+      for (const d of ['x', 'y'] as const) {
+        driftModal[d].set(extremePointDrifts(structure, um, f, d), m * P)
+      }
     }
     const driftCqc = { x: new Float64Array(P), y: new Float64Array(P) }
     const driftSrss = { x: new Float64Array(P), y: new Float64Array(P) }
@@ -149,8 +152,16 @@ function combinePeaks(a: FloorPeaks, b: FloorPeaks, rule: 'srss' | '100-30'): Fl
   const c = (x: number, y: number): number => combineDirections(x, y, rule)
   const arr = (x: Float64Array, y: Float64Array): Float64Array => x.map((v, i) => c(v, y[i]!))
   return {
-    dispCqc: [c(a.dispCqc[0], b.dispCqc[0]), c(a.dispCqc[1], b.dispCqc[1]), c(a.dispCqc[2], b.dispCqc[2])],
-    dispSrss: [c(a.dispSrss[0], b.dispSrss[0]), c(a.dispSrss[1], b.dispSrss[1]), c(a.dispSrss[2], b.dispSrss[2])],
+    dispCqc: [
+      c(a.dispCqc[0], b.dispCqc[0]),
+      c(a.dispCqc[1], b.dispCqc[1]),
+      c(a.dispCqc[2], b.dispCqc[2]),
+    ],
+    dispSrss: [
+      c(a.dispSrss[0], b.dispSrss[0]),
+      c(a.dispSrss[1], b.dispSrss[1]),
+      c(a.dispSrss[2], b.dispSrss[2]),
+    ],
     driftCqc: { x: arr(a.driftCqc.x, b.driftCqc.x), y: arr(a.driftCqc.y, b.driftCqc.y) },
     driftSrss: { x: arr(a.driftSrss.x, b.driftSrss.x), y: arr(a.driftSrss.y, b.driftSrss.y) },
     shearCqc: [c(a.shearCqc[0], b.shearCqc[0]), c(a.shearCqc[1], b.shearCqc[1])],
@@ -164,7 +175,11 @@ function combinePeaks(a: FloorPeaks, b: FloorPeaks, rule: 'srss' | '100-30'): Fl
  * by target / CQC base shear along that direction; `baseShear` is reported after scaling.
  * @see MODELING.md "Response spectrum"; Der Kiureghian (1981) for CQC (METHODS.md §3)
  */
-export function runSpectrum(structure: Structure, modes: ModalResult, settings: AnalysisSettings): SpectrumResult {
+export function runSpectrum(
+  structure: Structure,
+  modes: ModalResult,
+  settings: AnalysisSettings,
+): SpectrumResult {
   const zeta = settings.damping
   const count = modes.count
   const modalSa = new Float64Array(count)
@@ -200,13 +215,15 @@ export function runSpectrum(structure: Structure, modes: ModalResult, settings: 
   }
   const rule = settings.directionCombination
   const ids = structure.floors.map((f) => f.id)
+  const sx = scaleByDirection.x
+  const sy = scaleByDirection.y
   return {
     spectrum: settings.spectrum,
     damping: zeta,
     modalSa,
     baseShear: {
-      x: { cqc: baseOf('x', true) * scaleByDirection.x, srss: baseOf('x', false) * scaleByDirection.x },
-      y: { cqc: baseOf('y', true) * scaleByDirection.y, srss: baseOf('y', false) * scaleByDirection.y },
+      x: { cqc: baseOf('x', true) * sx, srss: baseOf('x', false) * sx },
+      y: { cqc: baseOf('y', true) * sy, srss: baseOf('y', false) * sy },
     },
     scale: Math.max(scaleByDirection.x, scaleByDirection.y),
     scaleByDirection,

@@ -1,8 +1,8 @@
 /**
  * Linear time history by modal superposition: each modal coordinate q_m obeys
- * q'' + 2 zeta omega q' + omega² q = -(Gamma_x a_gx + Gamma_y a_gy), integrated by Newmark's average
- * acceleration method (gamma = 1/2, beta = 1/4, unconditionally stable); floor displacements
- * u(t) = sum_m phi_m q_m(t). Displacements are relative to the ground.
+ * q'' + 2 zeta omega q' + omega² q = -(Gamma_x a_gx + Gamma_y a_gy), integrated by Newmark's
+ * average acceleration method (gamma = 1/2, beta = 1/4, unconditionally stable); floor
+ * displacements u(t) = sum_m phi_m q_m(t). Displacements are relative to the ground.
  * @see MODELING.md "Time history"; METHODS.md §10; Newmark (1959), J. Eng. Mech. Div. ASCE 85(EM3)
  *   (citation from memory)
  */
@@ -27,7 +27,8 @@ export interface NewmarkOptions {
 }
 
 /**
- * Newmark integration of u'' + 2 zeta omega u' + omega² u = p(t) (p per unit mass, sampled every dt).
+ * Newmark integration of u'' + 2 zeta omega u' + omega² u = p(t) (p per unit mass, sampled every
+ * dt).
  * Returns u, v, a at the sample times. Default: average acceleration (gamma = 1/2, beta = 1/4).
  * @see METHODS.md §10 (update formulas and effective stiffness)
  */
@@ -52,7 +53,7 @@ export function newmarkSdof(
   const c = 2 * zeta * omega
   let ui = options.u0 ?? 0
   let vi = options.v0 ?? 0
-  let ai = (load[0]! - c * vi - k * ui)
+  let ai = load[0]! - c * vi - k * ui
   u[0] = ui
   v[0] = vi
   a[0] = ai
@@ -68,7 +69,10 @@ export function newmarkSdof(
       const p = p0 + ((p1 - p0) * j) / sub
       const pHat = p + a1 * ui + a2 * vi + a3 * ai
       const un = pHat / kHat
-      const vn = (gamma / (beta * h)) * (un - ui) + (1 - gamma / beta) * vi + h * (1 - gamma / (2 * beta)) * ai
+      const vn =
+        (gamma / (beta * h)) * (un - ui) +
+        (1 - gamma / beta) * vi +
+        h * (1 - gamma / (2 * beta)) * ai
       const an = (un - ui) / (beta * h * h) - vi / (beta * h) - (1 / (2 * beta) - 1) * ai
       ui = un
       vi = vn
@@ -87,7 +91,11 @@ export function newmarkSdof(
  * default generated demo motion when none is set. Peaks are taken over every integration step; the
  * stored series keeps every `outputStride`-th step so that at most MAX_OUTPUT_STEPS are kept.
  */
-export function runTimeHistory(structure: Structure, modes: ModalResult, settings: AnalysisSettings): TimeHistoryResult {
+export function runTimeHistory(
+  structure: Structure,
+  modes: ModalResult,
+  settings: AnalysisSettings,
+): TimeHistoryResult {
   const motion = groundMotionFromSpec(settings.groundMotion)
   const zeta = settings.damping
   const steps = motion.ax.length
@@ -143,7 +151,12 @@ export function runTimeHistory(structure: Structure, modes: ModalResult, setting
     damping: zeta,
     displacements,
     dofCount: n,
-    peaks: structure.floors.map((f, i) => ({ floorId: f.id, x: peakX[i]!, y: peakY[i]!, rotation: peakR[i]! })),
+    peaks: structure.floors.map((f, i) => ({
+      floorId: f.id,
+      x: peakX[i]!,
+      y: peakY[i]!,
+      rotation: peakR[i]!,
+    })),
     groundMotionName: motion.name,
     synthetic: motion.synthetic,
     integrationDt: motion.dt,

@@ -1,6 +1,7 @@
 /**
- * ASCE/SEI 7-16 torsion criteria: Table 12.3-1 horizontal irregularity Types 1a and 1b (story drifts
- * with accidental torsion, Ax = 1), 12.8.4.3 amplification Ax = (delta_max / (1.2 delta_avg))²,
+ * ASCE/SEI 7-16 torsion criteria: Table 12.3-1 horizontal irregularity Types 1a and 1b (story
+ * drifts with accidental torsion, Ax = 1), 12.8.4.3 amplification
+ * Ax = (delta_max / (1.2 delta_avg))²,
  * 1 <= Ax <= 3 (Eq. 12.8-14, on floor displacements), 12.8.4.2 accidental eccentricity 5 %.
  * @see METHODS.md §1 for the wording and which parts are confirmed or from memory
  */
@@ -11,7 +12,8 @@ export const ASCE7_16: BuiltInCriterionSet = {
     id: 'asce7-16',
     name: 'ASCE/SEI 7-16 torsional irregularity',
     source:
-      'ASCE/SEI 7-16 Minimum Design Loads, Table 12.3-1 Types 1a/1b, 12.8.4.2 (accidental torsion, 5 %), ' +
+      'ASCE/SEI 7-16 Minimum Design Loads, Table 12.3-1 Types 1a/1b, ' +
+      '12.8.4.2 (accidental torsion, 5 %), ' +
       '12.8.4.3 Eq. 12.8-14 (Ax)',
     irregularRatio: 1.2,
     extremeRatio: 1.4,
@@ -33,7 +35,8 @@ export const ASCE7_16: BuiltInCriterionSet = {
   notes: [
     'Story drifts at the extreme points include accidental torsion with Ax = 1 (Table 12.3-1).',
     'Ax uses total floor displacements at the extreme points, not story drifts (12.8.4.3).',
-    'Rigid diaphragms are assumed; the Type 1 irregularities apply to rigid or semirigid diaphragms.',
+    'Rigid diaphragms are assumed; the Type 1 irregularities apply to rigid or semirigid ' +
+      'diaphragms.',
     'Consequences by seismic design category (12.3.3.1, 12.8.4.3, Table 12.6-1) are not evaluated.',
   ],
 }

@@ -1,7 +1,8 @@
 /**
  * EN 1998-1:2004 plan-regularity criteria 4.2.3.2(6): at every level and for each direction
  * e0x <= 0.30 r_x (Eq. 4.1a) and r_x >= l_s (Eq. 4.1b), e0x measured along x with
- * r_x = sqrt(K_T / K_y) (y analogous); accidental eccentricity e_ai = ±0.05 L_i (4.3.2(1)P, Eq. 4.3).
+ * r_x = sqrt(K_T / K_y) (y analogous); accidental eccentricity e_ai = ±0.05 L_i (4.3.2(1)P,
+ * Eq. 4.3).
  * @see METHODS.md §2 (the exact definition wording is from memory there)
  */
 import type { BuiltInCriterionSet } from './types'
@@ -28,7 +29,8 @@ export const EN1998_1: BuiltInCriterionSet = {
     extreme: 'not regular in plan',
   },
   notes: [
-    'Centre of rigidity and torsional radius use the floor-load definition (MODELING.md "Centres"); ' +
+    'Centre of rigidity and torsional radius use the floor-load definition ' +
+      '(MODELING.md "Centres"); ' +
       'for multi-storey buildings EN 1998-1 4.2.3.2(8) admits only approximate definitions.',
     'Failing Eq. 4.1b marks a torsionally flexible system (reduced q0 for concrete, 5.2.2.2); ' +
       'the behaviour factor is not evaluated here.',

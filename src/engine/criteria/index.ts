@@ -23,7 +23,11 @@ import type { BuiltInCriterionSet, CriterionClauses, CriterionLabels } from './t
 export type { BuiltInCriterionSet, CriterionClauses, CriterionLabels } from './types'
 
 /** The built-in sets, by id. Built-in ids take precedence over user sets of the same id. */
-export const BUILT_IN_CRITERION_SETS: readonly BuiltInCriterionSet[] = [ASCE7_16, EN1998_1, NBCC_2015]
+export const BUILT_IN_CRITERION_SETS: readonly BuiltInCriterionSet[] = [
+  ASCE7_16,
+  EN1998_1,
+  NBCC_2015,
+]
 
 /** Ids meaning "no criterion set". */
 const NO_SET_IDS = new Set(['', 'none'])
@@ -123,7 +127,9 @@ export function resolveCriterionSet(
         {
           code: 'criterion-unknown',
           severity: 'warning',
-          message: `[engine] criterion set '${id}' is not known (known: ${known.join(', ')}); no pass/fail checks are made`,
+          message:
+            `[engine] criterion set '${id}' is not known (known: ${known.join(', ')}); ` +
+            'no pass/fail checks are made',
           refs: [],
         },
       ],
@@ -159,7 +165,7 @@ export function amplificationFactor(
   return Math.min(rule.max, Math.max(rule.min, raw))
 }
 
-/** Overall verdict: fail if any row fails, pass if any passes and none fail, else not-applicable. */
+/** Overall verdict: fail if a row fails, pass if one passes and none fails, else not-applicable. */
 export function overallVerdict(rows: readonly CheckRow[]): Verdict {
   if (rows.some((r) => r.verdict === 'fail')) return 'fail'
   if (rows.some((r) => r.verdict === 'pass')) return 'pass'
@@ -167,7 +173,10 @@ export function overallVerdict(rows: readonly CheckRow[]): Verdict {
 }
 
 /** An evaluation of `set` (or of no set) from rows; always carries CAUTION and the source text. */
-export function buildEvaluation(set: CriterionSetSpec | null, rows: readonly CheckRow[]): CriterionEvaluation {
+export function buildEvaluation(
+  set: CriterionSetSpec | null,
+  rows: readonly CheckRow[],
+): CriterionEvaluation {
   if (!set) {
     return {
       setId: 'none',
@@ -200,10 +209,14 @@ const isRatio = (v: number): boolean => Number.isFinite(v) || v === Number.POSIT
 
 /**
  * Check rows of the ratio and amplification rules for every story and static case:
- * ratio > irregularRatio fails (irregular), ratio > extremeRatio fails (extreme); the ratio is taken on
- * story drifts or floor displacements per `ratioQuantity`. Amplification rows are informative.
+ * ratio > irregularRatio fails (irregular), ratio > extremeRatio fails (extreme); the ratio is
+ * taken on story drifts or floor displacements per `ratioQuantity`. Amplification rows are
+ * informative.
  */
-export function torsionCheckRows(set: CriterionSetSpec, inputs: readonly TorsionCheckInput[]): CheckRow[] {
+export function torsionCheckRows(
+  set: CriterionSetSpec,
+  inputs: readonly TorsionCheckInput[],
+): CheckRow[] {
   const clauses = criterionClauses(set)
   const labels = criterionLabels(set)
   const onDisplacement = set.ratioQuantity === 'displacement'
@@ -295,12 +308,19 @@ export function evaluateRegularity(
         rows.push({
           floorId,
           caseId: dir,
-          quantity: `eccentricity e0${dir} (along ${dir}, action along ${other}) vs ${set.eccentricityToRadius} r_${dir}`,
+          quantity:
+            `eccentricity e0${dir} (along ${dir}, action along ${other}) ` +
+            `vs ${set.eccentricityToRadius} r_${dir}`,
           value: e0,
           limit: usable ? limit : 0,
           verdict,
           clause: clauses.eccentricity,
-          label: verdict === 'fail' ? labels.irregular : verdict === 'pass' ? labels.regular : 'not evaluated (torsional radius undefined)',
+          label:
+            verdict === 'fail'
+              ? labels.irregular
+              : verdict === 'pass'
+                ? labels.regular
+                : 'not evaluated (torsional radius undefined)',
           comparison: '<=',
         })
       }
@@ -316,7 +336,12 @@ export function evaluateRegularity(
           limit,
           verdict,
           clause: clauses.radius,
-          label: verdict === 'fail' ? 'torsionally flexible' : verdict === 'pass' ? 'torsionally stiff' : 'not evaluated (torsional radius undefined)',
+          label:
+            verdict === 'fail'
+              ? 'torsionally flexible'
+              : verdict === 'pass'
+                ? 'torsionally stiff'
+                : 'not evaluated (torsional radius undefined)',
           comparison: '>=',
         })
       }

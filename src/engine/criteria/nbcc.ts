@@ -12,7 +12,8 @@ export const NBCC_2015: BuiltInCriterionSet = {
     id: 'nbcc-2015',
     name: 'NBCC 2015 torsional sensitivity (partly from memory)',
     source:
-      'National Building Code of Canada 2015, Division B 4.1.8.11(9)-(10) (B = delta_max/delta_ave, ' +
+      'National Building Code of Canada 2015, Division B 4.1.8.11(9)-(10) ' +
+      '(B = delta_max/delta_ave, ' +
       '±0.10 Dnx); threshold 1.7 and torque form partly from memory',
     irregularRatio: 1.7,
     ratioQuantity: 'displacement',
