@@ -61,6 +61,7 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
     issues.push(...solver.issues)
     return { ...base, status: 'mechanism', issues }
   }
+  issues.push(...solver.issues)
   lap('factor')
 
   const modes = solveModes(structure)
