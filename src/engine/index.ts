@@ -1,9 +1,11 @@
 /**
  * engine: pure numerics, model in, results out. Runs in node (CLI, tests) and in a Web Worker.
- * Public API: analyzeProject and the result types.
+ * Public API: analyzeProject, suggestBalance (the balance assistant) and the result types.
  * Must not import: react, three, zustand, editor, viewer, ui, window/document.
  */
 export { analyzeProject } from './analyze'
+export { balanceScore, suggestBalance } from './balance'
+export type { BalanceAction, BalanceOptions, BalanceResult, BalanceSuggestion } from './balance'
 export type {
   AnalysisOptions,
   AnalysisResult,
