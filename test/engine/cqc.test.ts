@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest'
-import { combineCqc, combineSrss, cqcCorrelation, cqcCorrelationEqual, cqcMatrix } from '@/engine/cqc'
+import {
+  combineCqc,
+  combineSrss,
+  cqcCorrelation,
+  cqcCorrelationEqual,
+  cqcMatrix,
+} from '@/engine/cqc'
 
 describe('cqcCorrelationEqual', () => {
   it('matches the equal-damping coefficient table', () => {

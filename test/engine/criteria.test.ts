@@ -34,12 +34,18 @@ const row = (driftRatio: number, displacementRatio = driftRatio): StoryTorsionRo
 })
 
 /** Centres of one floor from the floor flexibility block, by the MODELING.md "Centres" formulas. */
-function centresFromFlexibility(F: Float64Array, cm: { x: number; y: number }, ls: number): FloorCentres {
+function centresFromFlexibility(
+  F: Float64Array,
+  cm: { x: number; y: number },
+  ls: number,
+): FloorCentres {
   const ftt = F[8]!
   const xcr = -F[7]! / ftt
   const ycr = F[6]! / ftt
   // K_j = inv(F_j) (3x3 by cofactors)
-  const [a, b, c, d, e, f, g, h, i] = Array.from(F) as [number, number, number, number, number, number, number, number, number]
+  const [a, b, c, d, e, f, g, h, i] = Array.from(F) as [
+    number, number, number, number, number, number, number, number, number,
+  ]
   const det = a * (e * i - f * h) - b * (d * i - f * g) + c * (d * h - e * g)
   const kxx = (e * i - f * h) / det
   const kyy = (a * i - c * g) / det
@@ -88,7 +94,10 @@ describe('resolveCriterionSet', () => {
     }
     const r = resolveCriterionSet(settings({ criterionSet: 'office-rule', criterionSets: [mine] }))
     expect(r.set).toBe(mine)
-    const rows = torsionCheckRows(r.set!, [{ caseId: 'X+e', row: row(1.25) }, { caseId: 'X-e', row: row(1.35) }])
+    const rows = torsionCheckRows(r.set!, [
+      { caseId: 'X+e', row: row(1.25) },
+      { caseId: 'X-e', row: row(1.35) },
+    ])
     expect(rows.map((w) => w.verdict)).toEqual(['pass', 'fail'])
     expect(rows[0]!.clause).toContain('Our own office rule')
   })
@@ -146,7 +155,10 @@ describe('torsionCheckRows', () => {
   it('uses displacements, not drifts, for the NBCC sensitivity ratio', () => {
     const set = resolveCriterionSet(settings({ criterionSet: 'nbcc-2015' })).set!
     // NBCC 2015 4.1.8.11(9): B_x = delta_max/delta_ave of displacements; B > 1.7 sensitive
-    const rows = torsionCheckRows(set, [{ caseId: 'Y+e', row: row(1.9, 1.6) }, { caseId: 'Y-e', row: row(1.2, 1.75) }])
+    const rows = torsionCheckRows(set, [
+      { caseId: 'Y+e', row: row(1.9, 1.6) },
+      { caseId: 'Y-e', row: row(1.2, 1.75) },
+    ])
     expect(rows.map((w) => w.value)).toEqual([1.6, 1.75])
     expect(rows.map((w) => w.verdict)).toEqual(['pass', 'fail'])
     expect(rows[1]!.label).toContain('torsionally sensitive')
@@ -156,7 +168,8 @@ describe('torsionCheckRows', () => {
 describe('evaluateRegularity', () => {
   const s = oneStoreyEccentric()
   const F = denseSolver(s).floorFlexibility(0)
-  const centres = [centresFromFlexibility(F, s.floors[0]!.centreOfMass, s.floors[0]!.radiusOfGyration)]
+  const f0 = s.floors[0]!
+  const centres = [centresFromFlexibility(F, f0.centreOfMass, f0.radiusOfGyration)]
 
   it('fails 4.1a and passes 4.1b for the one-storey eccentric case', () => {
     // METHODS.md §8 (derived): CR = (6.6667, 5), e0x = 3.3333 m, r_x = 10.2740 m, r_y = 12.5831 m,

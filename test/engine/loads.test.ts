@@ -75,7 +75,7 @@ describe('runStaticTorsion', () => {
   const solver = denseSolver(s)
   const modes = denseModes(s)
 
-  it('reproduces the edge displacements of the one-storey eccentric case without eccentricity', () => {
+  it('reproduces the one-storey eccentric edge displacements without eccentricity', () => {
     const r = runStaticTorsion(s, solver, modes, settings({ accidentalEccentricity: 0 }), null)
     const c = caseOf(r, 'Y+e')
     const per1000kN = 1e6 / r.baseShear.y
@@ -97,7 +97,8 @@ describe('runStaticTorsion', () => {
     expect(plus.loadPoints[0]!.x).toBeCloseTo(11, 12)
     expect(minus.loadPoints[0]!.x).toBeCloseTo(9, 12)
     const per1000kN = (1e6 / r.baseShear.y) * 1000
-    // METHODS.md §8 (derived): +1.0 m shift -> edges 2.42105 and 5.15789 mm, ratio 1.36111, Ax 1.28654
+    // METHODS.md §8 (derived): +1.0 m shift -> edges 2.42105 and 5.15789 mm, ratio 1.36111,
+    // Ax 1.28654
     expect(plus.stories[0]!.driftMax * per1000kN).toBeCloseTo(5.15789, 4)
     expect(plus.stories[0]!.driftRatio).toBeCloseTo(1.36111, 5)
     expect(plus.stories[0]!.amplification!).toBeCloseTo(1.28654, 5)
@@ -139,7 +140,8 @@ describe('runStaticTorsion', () => {
       ],
     )
     const m = denseModes(sym)
-    const r0 = runStaticTorsion(sym, denseSolver(sym), m, settings({ accidentalEccentricity: 0 }), null)
+    const noEcc = settings({ accidentalEccentricity: 0 })
+    const r0 = runStaticTorsion(sym, denseSolver(sym), m, noEcc, null)
     for (const c of r0.cases) expect(c.stories[0]!.driftRatio).toBeCloseTo(1, 10)
     // with e = 1 m: K_y = 2k, K_T = 2k*10² + 2k*5² = 250k; theta = F e / K_T; edge ratio
     // (delta_c + theta*10)/delta_c with delta_c = F/(2k): 1 + 2k*10/250k = 1.08 (hand calculation)
@@ -216,9 +218,10 @@ describe('runStaticTorsion', () => {
     const r = runStaticTorsion(ms, denseSolver(ms), mm, settings(), null)
     expect(r.periodUsed.x).toBeCloseTo(dominantPeriod(mm, 'x'), 12)
     expect(r.exponent.x).toBeCloseTo(verticalDistributionExponent(r.periodUsed.x), 12)
-    // the first x mode of a uniform-mass shear building carries most of the x mass (common practice)
+    // the first x mode of a uniform-mass shear building carries most x mass (common practice)
     let best = 0
-    for (let m = 1; m < mm.count; m++) if (mm.effectiveMassRatio.x[m]! > mm.effectiveMassRatio.x[best]!) best = m
+    const ex = mm.effectiveMassRatio.x
+    for (let m = 1; m < mm.count; m++) if (ex[m]! > ex[best]!) best = m
     expect(r.periodUsed.x).toBeCloseTo(mm.periods[best]!, 12)
   })
 })

@@ -12,7 +12,13 @@ import {
   tableOrdinate,
 } from '@/engine/spectra'
 import { pointDisplacement } from '@/engine/loads'
-import { buildTestStructure, denseModes, multiStoreyEccentric, oneStoreyEccentric, shearElement } from './torsionFixtures'
+import {
+  buildTestStructure,
+  denseModes,
+  multiStoreyEccentric,
+  oneStoreyEccentric,
+  shearElement,
+} from './torsionFixtures'
 import { generateBuilding, transformProject } from '../helpers/generateBuilding'
 import { projectBuilder } from '../helpers/projectBuilder'
 
@@ -94,7 +100,8 @@ describe('runSpectrum', () => {
     const s = oneStoreyEccentric()
     const modes = denseModes(s)
     // SD1 = 1.2 puts T0 = 0.24 s above the x period, so the rising branch is used (kept by default)
-    const r = runSpectrum(s, modes, settings({ spectrum: { kind: 'asce7', SDS: 1, SD1: 1.2, TL: 8 } }))
+    const steep = settings({ spectrum: { kind: 'asce7', SDS: 1, SD1: 1.2, TL: 8 } })
+    const r = runSpectrum(s, modes, steep)
     // METHODS.md §8: the x mode is pure (omega = 44.7214 rad/s, Meff_x = m); ASCE 7-16 11.4.6
     const T = (2 * Math.PI) / 44.7214
     const sa = 0.4 + (0.6 * T) / 0.24
@@ -109,7 +116,9 @@ describe('runSpectrum', () => {
     // METHODS.md §8 (derived): omega 50.8638 and 93.8769 rad/s, Meff_y = 0.93368 m and 0.06632 m
     const w = [50.8638, 93.8769]
     const meff = [0.93368, 0.06632]
-    const V = w.map((wi, i) => meff[i]! * 1e5 * asce7Ordinate(1, 0.6, 8, (2 * Math.PI) / wi) * GRAVITY)
+    const V = w.map(
+      (wi, i) => meff[i]! * 1e5 * asce7Ordinate(1, 0.6, 8, (2 * Math.PI) / wi) * GRAVITY,
+    )
     const rho = cqcCorrelationEqual(w[1]! / w[0]!, 0.05)
     const cqc = Math.sqrt(V[0]! ** 2 + V[1]! ** 2 + 2 * rho * V[0]! * V[1]!)
     expect(r.baseShear.y.cqc / cqc).toBeCloseTo(1, 4)
@@ -132,7 +141,8 @@ describe('runSpectrum', () => {
     const sums = corners.map(() => 0)
     for (let m = 0; m < modes.count; m++) {
       const w = modes.angularFrequencies[m]!
-      const D = (modes.participation.x[m]! * asce7Ordinate(1, 0.6, 8, modes.periods[m]!) * GRAVITY) / w ** 2
+      const sa = asce7Ordinate(1, 0.6, 8, modes.periods[m]!)
+      const D = (modes.participation.x[m]! * sa * GRAVITY) / w ** 2
       const u = modes.shapes.subarray(m * n, (m + 1) * n).map((v) => v * D)
       corners.forEach((p, k) => {
         const d = pointDisplacement(u, 1, p, 'x') - pointDisplacement(u, 0, p, 'x')
@@ -218,23 +228,32 @@ describe('runSpectrum through analyzeProject', () => {
     // METHODS.md §8 modes (derived) with ASCE 7-16 11.4.6 ordinates and the Der Kiureghian rho
     const w = [50.8638, 93.8769]
     const meff = [0.93368, 0.06632]
-    const V = w.map((wi, i) => meff[i]! * 1e5 * asce7Ordinate(1, 0.6, 8, (2 * Math.PI) / wi) * GRAVITY)
+    const V = w.map(
+      (wi, i) => meff[i]! * 1e5 * asce7Ordinate(1, 0.6, 8, (2 * Math.PI) / wi) * GRAVITY,
+    )
     const rho = cqcCorrelationEqual(w[1]! / w[0]!, 0.05)
-    expect(r.baseShear.y.cqc / Math.sqrt(V[0]! ** 2 + V[1]! ** 2 + 2 * rho * V[0]! * V[1]!)).toBeCloseTo(1, 4)
+    const cqc = Math.sqrt(V[0]! ** 2 + V[1]! ** 2 + 2 * rho * V[0]! * V[1]!)
+    expect(r.baseShear.y.cqc / cqc).toBeCloseTo(1, 4)
   })
 
   it('scales linearly with the spectrum and does not depend on the plan origin', () => {
     const g = generateBuilding({ floors: 10, seed: 21 })
-    const p = { ...g, settings: { ...g.settings, spectrum: { kind: 'asce7' as const, SDS: 1, SD1: 0.6, TL: 8 } } }
+    const base = { kind: 'asce7' as const, SDS: 1, SD1: 0.6, TL: 8 }
+    const p = { ...g, settings: { ...g.settings, spectrum: base } }
     const a = analyzeProject(p).spectrum!
-    // same shape, doubled ordinates (SDS 2, SD1 1.2 keep T0 and Ts): every response doubles (linearity)
+    // same shape, doubled ordinates (SDS 2, SD1 1.2 keep T0 and Ts): responses double (linearity)
     const doubled = analyzeProject({
       ...p,
       settings: { ...p.settings, spectrum: { kind: 'asce7', SDS: 2.0, SD1: 1.2, TL: 8 } },
     }).spectrum!
     expect(doubled.baseShear.x.cqc / a.baseShear.x.cqc).toBeCloseTo(2, 9)
     expect(doubled.combined[4]!.driftMaxCqc.y / a.combined[4]!.driftMaxCqc.y).toBeCloseTo(2, 9)
-    const zero = { ...p, settings: { ...p.settings, spectrum: { kind: 'table' as const, points: [[0, 0], [100, 0]] as [number, number][] } } }
+    const flat: [number, number][] = [
+      [0, 0],
+      [100, 0],
+    ]
+    const zeroSpectrum = { kind: 'table' as const, points: flat }
+    const zero = { ...p, settings: { ...p.settings, spectrum: zeroSpectrum } }
     // a zero spectrum gives zero response (closed form)
     expect(analyzeProject(zero).spectrum!.baseShear.x.cqc).toBeCloseTo(0, 9)
     const moved = analyzeProject(transformProject(p, { dx: -40, dy: 75, angle: 0 })).spectrum!

@@ -1,7 +1,11 @@
 import { describe, expect, it } from 'vitest'
 import type { AnalysisSettings } from '@/model'
 import { analyzeProject } from '@/engine'
-import { DEFAULT_DEMO_MOTION, generateDemoMotion, groundMotionFromSpec } from '@/engine/groundMotion'
+import {
+  DEFAULT_DEMO_MOTION,
+  generateDemoMotion,
+  groundMotionFromSpec,
+} from '@/engine/groundMotion'
 import { GRAVITY } from '@/engine/spectra'
 import { MAX_OUTPUT_STEPS, newmarkSdof, runTimeHistory } from '@/engine/timeHistory'
 import { buildTestStructure, denseModes, oneStoreyEccentric, shearElement } from './torsionFixtures'
@@ -25,23 +29,32 @@ const maxAbs = (a: ArrayLike<number>, from = 0): number => {
 
 /**
  * Closed-form peak of an undamped SDOF (omega) under a half-sine ground pulse a_g = A sin(pi t/td),
- * t < td: forced phase u = -(A/omega²)/(1-b²) (sin(pi t/td) - b sin(omega t)), b = (pi/td)/omega, then
- * free vibration with amplitude sqrt(u² + (v/omega)²). Chopra, Dynamics of Structures, §4.8 (from memory).
+ * t < td: forced phase u = -(A/omega²)/(1-b²) (sin(pi t/td) - b sin(omega t)), b = (pi/td)/omega,
+ * then free vibration with amplitude sqrt(u² + (v/omega)²).
+ * Chopra, Dynamics of Structures, §4.8 (from memory).
  */
 function halfSinePeak(omega: number, A: number, td: number): number {
   const W = Math.PI / td
   const b = W / omega
   const ust = A / (omega * omega)
-  const u = (t: number): number => (-ust / (1 - b * b)) * (Math.sin(W * t) - b * Math.sin(omega * t))
-  const v = (t: number): number => (-ust / (1 - b * b)) * (W * Math.cos(W * t) - b * omega * Math.cos(omega * t))
+  const f = -ust / (1 - b * b)
+  const u = (t: number): number => f * (Math.sin(W * t) - b * Math.sin(omega * t))
+  const v = (t: number): number => f * (W * Math.cos(W * t) - b * omega * Math.cos(omega * t))
   let peak = 0
   for (let i = 0; i <= 20000; i++) peak = Math.max(peak, Math.abs(u((td * i) / 20000)))
   const free = Math.hypot(u(td), v(td) / omega)
   return Math.max(peak, free)
 }
 
+/** Half-sine pulse A sin(pi t/td) for t < td, then 0; n samples at dt. */
+function halfSine(A: number, td: number, dt: number, n: number): number[] {
+  return Array.from({ length: n }, (_, s) =>
+    s * dt < td ? A * Math.sin((Math.PI * s * dt) / td) : 0,
+  )
+}
+
 describe('newmarkSdof', () => {
-  it('preserves the amplitude of undamped free vibration and elongates the period as predicted', () => {
+  it('keeps the undamped amplitude and elongates the period as predicted', () => {
     const omega = 2 * Math.PI
     const dt = 0.1 // dt/T = 0.1
     const steps = 2001
@@ -63,7 +76,8 @@ describe('newmarkSdof', () => {
     const dt = 0.002
     const r = newmarkSdof(w, z, dt, new Float64Array(5001), { u0: 0.02, v0: -0.1 })
     const exact = (t: number) =>
-      Math.exp(-z * w * t) * (0.02 * Math.cos(wd * t) + ((-0.1 + z * w * 0.02) / wd) * Math.sin(wd * t))
+      Math.exp(-z * w * t) *
+      (0.02 * Math.cos(wd * t) + ((-0.1 + z * w * 0.02) / wd) * Math.sin(wd * t))
     // tolerance 5e-6 on an amplitude of 0.02 (period error (w dt)²/12 over 8 cycles)
     for (const s of [250, 1000, 3333, 5000]) expect(r.u[s]! - exact(s * dt)).toBeCloseTo(0, 5)
   })
@@ -90,7 +104,7 @@ describe('newmarkSdof', () => {
       const A = 0.4 * GRAVITY
       const dt = 0.001
       const n = Math.round((td + 3) / dt) + 1
-      const ag = Float64Array.from({ length: n }, (_, s) => (s * dt < td ? A * Math.sin((Math.PI * s * dt) / td) : 0))
+      const ag = Float64Array.from(halfSine(A, td, dt, n))
       const r = newmarkSdof(omega, 0, dt, ag.map((v) => -v))
       expect(maxAbs(r.u) / halfSinePeak(omega, A, td)).toBeCloseTo(1, 3)
     }
@@ -100,7 +114,8 @@ describe('newmarkSdof', () => {
     const w = 40 // T = 0.157 s, record dt = 0.05 s, 16 sub-steps of h = 0.003125 s
     const h = 0.05 / 16
     const r = newmarkSdof(w, 0, 0.05, new Float64Array(201), { u0: 0.01, substeps: 16 })
-    // discrete closed form of average acceleration: u_n = u0 cos(n * 2 atan(w h / 2)) (METHODS.md §10)
+    // discrete closed form of average acceleration: u_n = u0 cos(n * 2 atan(w h / 2))
+    // (METHODS.md §10)
     const wNum = (2 / h) * Math.atan((w * h) / 2)
     expect(r.u[200]! / 0.01).toBeCloseTo(Math.cos(wNum * 10), 8)
     // and the undivided coarse step would be far off (w dt = 2)
@@ -140,9 +155,8 @@ describe('groundMotionFromSpec', () => {
   })
 
   it('names the field when the record step is not positive', () => {
-    expect(() => groundMotionFromSpec({ kind: 'record', name: 'r', dt: 0, ax: [1], ay: [1] })).toThrow(
-      'groundMotion.dt: must be > 0',
-    )
+    const bad = { kind: 'record' as const, name: 'r', dt: 0, ax: [1], ay: [1] }
+    expect(() => groundMotionFromSpec(bad)).toThrow('groundMotion.dt: must be > 0')
   })
 })
 
@@ -157,13 +171,13 @@ describe('runTimeHistory', () => {
     ],
   )
 
-  it('gives the closed-form SDOF peak for a symmetric one-storey building under a pulse in X', () => {
+  it('gives the closed-form SDOF peak for a symmetric one-storey building under an X pulse', () => {
     const omega = Math.sqrt(2e7 / 1e5) // closed form omega = sqrt(k/m)
     const td = 0.5
     const dt = 0.002
     const A = 0.3 * GRAVITY
     const n = Math.round(4 / dt) + 1
-    const ax = Array.from({ length: n }, (_, s) => (s * dt < td ? A * Math.sin((Math.PI * s * dt) / td) : 0))
+    const ax = halfSine(A, td, dt, n)
     const r = runTimeHistory(
       sym,
       denseModes(sym),
@@ -199,7 +213,7 @@ describe('runTimeHistory', () => {
   })
 
   it('stays below the response-spectrum-like bound sum |Gamma| D_m for the eccentric plan', () => {
-    // modal superposition bound: |u_y(CM)| <= sum_m |phi_m,CM Gamma_m| max|q_m| (triangle inequality)
+    // modal superposition bound: |u_y(CM)| <= sum_m |phi_m,CM| max|q_m| (triangle inequality)
     const s = oneStoreyEccentric()
     const modes = denseModes(s)
     const motion = { kind: 'generated' as const, pga: 0.3, duration: 15, seed: 9, yFactor: 1 }
@@ -208,8 +222,11 @@ describe('runTimeHistory', () => {
     let bound = 0
     for (let m = 0; m < modes.count; m++) {
       const w = modes.angularFrequencies[m]!
-      const load = g.ax.map((v, i) => -(modes.participation.x[m]! * v + modes.participation.y[m]! * g.ay[i]!))
-      const q = newmarkSdof(w, 0.05, g.dt, load, { substeps: Math.ceil(g.dt / ((2 * Math.PI) / w / 10)) })
+      const gx = modes.participation.x[m]!
+      const gy = modes.participation.y[m]!
+      const load = g.ax.map((v, i) => -(gx * v + gy * g.ay[i]!))
+      const substeps = Math.ceil(g.dt / ((2 * Math.PI) / w / 10))
+      const q = newmarkSdof(w, 0.05, g.dt, load, { substeps })
       const phi = modes.shapes.subarray(m * 3, m * 3 + 3)
       bound += Math.abs(phi[1]! + phi[2]! * 10) * maxAbs(q.u)
     }
@@ -225,14 +242,17 @@ describe('runTimeHistory through analyzeProject', () => {
     const td = 0.4
     const A = 0.25 * GRAVITY
     const n = Math.round(4 / dt) + 1
-    const ay = Array.from({ length: n }, (_, s) => (s * dt < td ? A * Math.sin((Math.PI * s * dt) / td) : 0))
+    const ay = halfSine(A, td, dt, n)
     const p = projectBuilder({ floors: 1 })
       .rectSlab({ width: 20, depth: 10, areaMass: 500 })
       .frameLine({ p1: { x: 0, y: 0 }, p2: { x: 0, y: 10 }, storyStiffness: k })
       .frameLine({ p1: { x: 20, y: 0 }, p2: { x: 20, y: 10 }, storyStiffness: k })
       .frameLine({ p1: { x: 0, y: 0 }, p2: { x: 20, y: 0 }, storyStiffness: k })
       .frameLine({ p1: { x: 0, y: 10 }, p2: { x: 20, y: 10 }, storyStiffness: k })
-      .settings({ damping: 0, groundMotion: { kind: 'record', name: 'half-sine pulse', dt, ax: [], ay } })
+      .settings({
+        damping: 0,
+        groundMotion: { kind: 'record', name: 'half-sine pulse', dt, ax: [], ay },
+      })
       .build()
     const r = analyzeProject(p, { spectrum: false, timeHistory: true }).timeHistory!
     // Chopra §4.8 closed form (from memory): omega = sqrt(2k/m)
@@ -245,7 +265,16 @@ describe('runTimeHistory through analyzeProject', () => {
     const p = generateBuilding({ floors: 15, seed: 4 })
     const withMotion = {
       ...p,
-      settings: { ...p.settings, groundMotion: { kind: 'generated' as const, pga: 0.2, duration: 12, seed: 5, yFactor: 0.4 } },
+      settings: {
+        ...p.settings,
+        groundMotion: {
+          kind: 'generated' as const,
+          pga: 0.2,
+          duration: 12,
+          seed: 5,
+          yFactor: 0.4,
+        },
+      },
     }
     const a = analyzeProject(withMotion, { spectrum: false, timeHistory: true }).timeHistory!
     const b = analyzeProject(withMotion, { spectrum: false, timeHistory: true }).timeHistory!

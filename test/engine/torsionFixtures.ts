@@ -1,7 +1,7 @@
 /**
- * Hand-built Structure, StiffnessSolver and ModalResult objects for the loads, spectrum, criteria and
- * time-history tests, independent of the project's assembly, factorization and eigen code: a dense
- * Gaussian solve and ml-matrix's symmetric eigen decomposition (a general-purpose library).
+ * Hand-built Structure, StiffnessSolver and ModalResult objects for the loads, spectrum, criteria
+ * and time-history tests, independent of the project's assembly, factorization and eigen code:
+ * a dense Gaussian solve and ml-matrix's symmetric eigen decomposition (a general-purpose library).
  */
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix'
 import type { Point } from '@/model'
@@ -51,7 +51,10 @@ export function shearElement(at: Point, dir: Point, k: readonly number[]): Eleme
   return { at, dir, floors: k.map((_, i) => i), stiffness: K }
 }
 
-export function buildTestStructure(floors: readonly RectFloor[], elements: readonly ElementSpec[]): Structure {
+export function buildTestStructure(
+  floors: readonly RectFloor[],
+  elements: readonly ElementSpec[],
+): Structure {
   const n = floors.length
   const dof = 3 * n
   const K = new Float64Array(dof * dof)
@@ -239,9 +242,14 @@ export function denseModes(structure: Structure): ModalResult {
     }
     return out
   }
-  const part = { x: new Float64Array(count), y: new Float64Array(count), rz: new Float64Array(count) }
-  const eff = { x: new Float64Array(count), y: new Float64Array(count), rz: new Float64Array(count) }
-  const cum = { x: new Float64Array(count), y: new Float64Array(count), rz: new Float64Array(count) }
+  const triple = () => ({
+    x: new Float64Array(count),
+    y: new Float64Array(count),
+    rz: new Float64Array(count),
+  })
+  const part = triple()
+  const eff = triple()
+  const cum = triple()
   for (const k of ['x', 'y', 'rz'] as const) {
     const r = infl(k)
     const Mr = Mtimes(r)
@@ -275,8 +283,8 @@ export function denseModes(structure: Structure): ModalResult {
 }
 
 /**
- * METHODS.md §8 self-derived one-storey case: 20 m x 10 m plan, m = 100 t, k = 1e5 kN/m; y-walls 2k at
- * x = 0 and k at x = 20; x-walls k at y = 0 and y = 10.
+ * METHODS.md §8 self-derived one-storey case: 20 m x 10 m plan, m = 100 t, k = 1e5 kN/m;
+ * y-walls 2k at x = 0 and k at x = 20; x-walls k at y = 0 and y = 10.
  */
 export function oneStoreyEccentric(k = 1e8): Structure {
   return buildTestStructure(
