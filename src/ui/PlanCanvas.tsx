@@ -39,6 +39,10 @@ export type PlanPreview =
   | { readonly kind: 'point'; readonly at: Point }
   | { readonly kind: 'box'; readonly a: Point; readonly b: Point }
 
+export type PlanHandle =
+  | { readonly kind: 'endpoint'; readonly id: string; readonly end: 'p1' | 'p2'; readonly at: Point }
+  | { readonly kind: 'rotate'; readonly at: Point; readonly pivot: Point }
+
 export interface PlanSnap {
   readonly at: Point
   /** 'grid', 'endpoint', 'midpoint', 'vertex', 'intersection', ... */
@@ -56,6 +60,8 @@ interface Props {
   readonly showOverlays: boolean
   readonly preview: readonly PlanPreview[]
   readonly snap: PlanSnap | null
+  /** Selection handles from the editor (endpoints to stretch, one rotation knob). */
+  readonly handles: readonly PlanHandle[]
   /** Live length/angle text near the pointer while drawing. */
   readonly readout: string | null
   /** Increment to fit the view to `bounds`. */
@@ -76,7 +82,7 @@ export function PlanCanvas(props: Props) {
   const [hover, setHover] = useState<Point | null>(null)
   const panning = useRef<{ x: number; y: number } | null>(null)
   const spaceDown = useRef(false)
-  const fitted = useRef<{ request: number; width: number; height: number } | null>(null)
+  const fitted = useRef<{ request: number; real: boolean } | null>(null)
 
   useLayoutEffect(() => {
     const host = hostRef.current
@@ -91,13 +97,21 @@ export function PlanCanvas(props: Props) {
     return () => observer?.disconnect()
   }, [])
 
-  // Fit on first real size and whenever asked to.
-  useEffect(() => {
+  // Fit on the first real size, and whenever asked to.
+  useLayoutEffect(() => {
+    const host = hostRef.current
+    if (!host) return
+    const r = host.getBoundingClientRect()
+    const real = r.width > 0 && r.height > 0
+    // Wait for the measured size to reach state before the first fit.
+    if (real && (Math.round(r.width) !== size.width || Math.round(r.height) !== size.height)) return
     const last = fitted.current
-    if (last && last.request === props.fitRequest) return
-    fitted.current = { request: props.fitRequest, width: size.width, height: size.height }
+    if (last && last.request === props.fitRequest && last.real) return
+    fitted.current = { request: props.fitRequest, real }
     setView(fitView(bounds, size))
-  }, [props.fitRequest, size, bounds])
+    // bounds left out on purpose: editing must not re-fit the view under the pointer.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [props.fitRequest, size])
 
   const { onViewChange } = props
   useEffect(() => {
@@ -282,24 +296,6 @@ export function PlanCanvas(props: Props) {
     })
   }
 
-  const segHandles = (id: string, p1: Point, p2: Point): ReactNode => {
-    const a = S(p1)
-    const b = S(p2)
-    const mx = (a.x + b.x) / 2
-    const my = (a.y + b.y) / 2
-    const len = Math.hypot(b.x - a.x, b.y - a.y) || 1
-    const rx = mx + ((a.y - b.y) / len) * 26
-    const ry = my + ((b.x - a.x) / len) * 26
-    return (
-      <>
-        <line className="rotate-stem" x1={mx} y1={my} x2={rx} y2={ry} />
-        <circle className="handle rotate" data-id={id} data-part="rotate" data-testid={`handle-${id}-rotate`} cx={rx} cy={ry} r={5} />
-        <rect className="handle" data-id={id} data-part="p1" data-testid={`handle-${id}-p1`} x={a.x - 5} y={a.y - 5} width={10} height={10} />
-        <rect className="handle" data-id={id} data-part="p2" data-testid={`handle-${id}-p2`} x={b.x - 5} y={b.y - 5} width={10} height={10} />
-      </>
-    )
-  }
-
   for (const f of scene.frameLines) {
     const a = S(f.p1)
     const b = S(f.p2)
@@ -310,7 +306,6 @@ export function PlanCanvas(props: Props) {
         <line className="frame-line" x1={a.x} y1={a.y} x2={b.x} y2={b.y} />
         <circle className="frame-end" cx={a.x} cy={a.y} r={3} />
         <circle className="frame-end" cx={b.x} cy={b.y} r={3} />
-        {selected ? segHandles(f.id, f.p1, f.p2) : null}
       </g>,
     )
   }
@@ -324,7 +319,6 @@ export function PlanCanvas(props: Props) {
       <g key={w.id} data-id={w.id} data-kind="wall" data-testid={`el-${w.id}`} className={`wall${selected ? ' selected' : ''}`}>
         <line className="hit" x1={a.x} y1={a.y} x2={b.x} y2={b.y} />
         <path className="wall-body" d={polygonPath(outline)} />
-        {selected ? segHandles(w.id, w.p1, w.p2) : null}
       </g>,
     )
   }
@@ -343,9 +337,6 @@ export function PlanCanvas(props: Props) {
           height={2 * half}
           transform={`rotate(${(-c.angle * 180) / Math.PI} ${s.x} ${s.y})`}
         />
-        {selected ? (
-          <circle className="handle rotate" data-id={c.id} data-part="rotate" data-testid={`handle-${c.id}-rotate`} cx={s.x + half + 14} cy={s.y} r={5} />
-        ) : null}
       </g>,
     )
   }
@@ -369,6 +360,33 @@ export function PlanCanvas(props: Props) {
         <path className="point-mass-body" d={`M${s.x} ${s.y - 7} L${s.x + 7} ${s.y} L${s.x} ${s.y + 7} L${s.x - 7} ${s.y} Z`} />
       </g>,
     )
+  }
+
+  for (const h of props.handles) {
+    const s = S(h.at)
+    if (h.kind === 'endpoint') {
+      layers.push(
+        <rect
+          key={`h-${h.id}-${h.end}`}
+          className="handle"
+          data-id={h.id}
+          data-part={h.end}
+          data-testid={`handle-${h.id}-${h.end}`}
+          x={s.x - 5}
+          y={s.y - 5}
+          width={10}
+          height={10}
+        />,
+      )
+    } else {
+      const c = S(h.pivot)
+      layers.push(
+        <g key="h-rotate">
+          <line className="rotate-stem" x1={c.x} y1={c.y} x2={s.x} y2={s.y} />
+          <circle className="handle rotate" data-part="rotate" data-testid="handle-rotate" cx={s.x} cy={s.y} r={6} />
+        </g>,
+      )
+    }
   }
 
   // Live centre overlays.
@@ -463,7 +481,7 @@ export function PlanCanvas(props: Props) {
     const s = S(snap.at)
     pv.push(
       <g key="snap" className={`snap snap-${snap.kind}`} data-testid="snap-indicator" data-kind={snap.kind} transform={`translate(${s.x} ${s.y})`}>
-        {snap.kind === 'midpoint' ? <path d="M0 -7 L7 5 L-7 5 Z" /> : snap.kind === 'grid' ? <path d="M-6 0 H6 M0 -6 V6" /> : <rect x={-5} y={-5} width={10} height={10} />}
+        {snap.kind === 'midpoint' ? <path d="M0 -7 L7 5 L-7 5 Z" /> : snap.kind.startsWith('grid') ? <path d="M-6 0 H6 M0 -6 V6" /> : <rect x={-5} y={-5} width={10} height={10} />}
       </g>,
     )
   }

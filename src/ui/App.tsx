@@ -1,0 +1,501 @@
+/**
+ * The main screen: toolbar from the action table, floor stack, the plan of the current floor with
+ * live centre overlays, the 3D view beside it, problems and results below, inspector on the right,
+ * and a status line. Every panel sits in its own error boundary.
+ */
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react'
+import type { ChangeEvent } from 'react'
+import {
+  dispatch,
+  execute,
+  loadDocument,
+  mark,
+  ROTATE_HANDLE_OFFSET,
+  parseNumericEntry,
+  resetTool,
+  selectCanRedo,
+  selectCanUndo,
+  selectionHandles,
+  setCurrentFloor,
+  setMessage,
+  setSelection,
+} from '@/editor'
+import type { Draft, EditorStore } from '@/editor'
+import type { Issue } from '@/engine'
+import { demoProject } from '@/model'
+import type { BaseRef, FloorId, Project, UnitSystem } from '@/model'
+import { ViewerPane } from '@/viewer'
+import { ACTIONS, actionForKey } from './actions'
+import type { Action, ActionContext } from './actions'
+import type { AnalysisClient } from './analysisClient'
+import { createAutosaver } from './autosave'
+import { blankProject } from './blankProject'
+import { ErrorBoundary } from './ErrorBoundary'
+import { FloorStack } from './FloorStack'
+import type { FloorActions } from './FloorStack'
+import { floorOverlay } from './floorOverlay'
+import { useAnalysis } from './hooks/useAnalysis'
+import { useEditor, useEditorPick } from './hooks/useEditor'
+import { Inspector } from './Inspector'
+import type { InspectedKind } from './Inspector'
+import { PlanCanvas } from './PlanCanvas'
+import type { PlanPointerEvent, PlanPreview } from './PlanCanvas'
+import { planScene, sceneBounds } from './planScene'
+import { ProblemsPanel } from './ProblemsPanel'
+import { downloadProject, readProjectText } from './projectFile'
+import { formatQuantity, fromDisplay } from './quantities'
+import { ResultsPanel } from './ResultsPanel'
+import { StatusLine } from './StatusLine'
+
+export interface AppProps {
+  readonly store: EditorStore
+  readonly analysis: AnalysisClient
+  /** A message from start-up (autosave restored or refused). */
+  readonly startupNotice?: string | null
+}
+
+interface Banner {
+  readonly kind: 'error' | 'info' | 'confirm'
+  readonly title: string
+  readonly lines: readonly string[]
+}
+
+const UNITS_KEY = 'gyre.units'
+const PICK_PIXELS = 8
+const DRAWING_TOOLS = new Set(['wall', 'frame', 'slab', 'opening', 'mass-line'])
+
+function storedUnits(): UnitSystem {
+  try {
+    return localStorage.getItem(UNITS_KEY) === 'US' ? 'US' : 'SI'
+  } catch (_err) {
+    return 'SI'
+  }
+}
+
+function isTyping(target: EventTarget | null): boolean {
+  return (
+    target instanceof HTMLInputElement ||
+    target instanceof HTMLTextAreaElement ||
+    target instanceof HTMLSelectElement ||
+    (target instanceof HTMLElement && target.isContentEditable)
+  )
+}
+
+function previewOf(draft: Draft | null, wallThickness: number): PlanPreview[] {
+  if (!draft) return []
+  switch (draft.kind) {
+    case 'segment':
+      return [draft.tool === 'wall' ? { kind: 'segment', p1: draft.p1, p2: draft.p2, thickness: wallThickness } : { kind: 'segment', p1: draft.p1, p2: draft.p2 }]
+    case 'polyline':
+      return [{ kind: 'polyline', points: draft.points, closed: draft.closed }]
+    case 'point':
+      return [{ kind: 'point', at: draft.at }]
+    case 'box':
+      return [{ kind: 'box', a: draft.min, b: draft.max }]
+    case 'rotate':
+      return []
+    default: {
+      const never: never = draft
+      throw new Error(`[ui] unknown draft ${String(never)}`)
+    }
+  }
+}
+
+export function App({ store, analysis, startupNotice = null }: AppProps) {
+  const doc = useEditor(store, (s) => s.doc)
+  const revision = useEditor(store, (s) => s.revision)
+  const floorId = useEditor(store, (s) => s.currentFloor)
+  const selection = useEditor(store, (s) => s.selection)
+  const tool = useEditorPick(store, (s) => ({ id: s.tool.id, state: s.tool.state }))
+  const ephemeral = useEditor(store, (s) => s.ephemeral)
+  const message = useEditor(store, (s) => s.message)
+  const canUndo = useEditor(store, selectCanUndo)
+  const canRedo = useEditor(store, selectCanRedo)
+  const wallThickness = useEditor(store, (s) => s.defaults.wallThickness)
+  const state = useAnalysis(analysis)
+
+  const [units, setUnits] = useState<UnitSystem>(storedUnits)
+  const [showOverlays, setShowOverlays] = useState(true)
+  const [fitRequest, setFitRequest] = useState(0)
+  const [banner, setBanner] = useState<Banner | null>(startupNotice ? { kind: 'info', title: startupNotice, lines: [] } : null)
+  const [autosavedAt, setAutosavedAt] = useState<string | null>(null)
+  const [statusNote, setStatusNote] = useState<string | null>(null)
+  const [numericText, setNumericText] = useState('')
+  const [viewScale, setViewScale] = useState(20)
+  const onViewChange = useCallback((v: { scale: number }) => setViewScale(v.scale), [])
+  const fileInput = useRef<HTMLInputElement>(null)
+
+  // Analysis on every revision (latest wins in the client) and debounced autosave.
+  const autosaver = useMemo(
+    () =>
+      createAutosaver(400, (r) => {
+        if (r.ok) setAutosavedAt(r.savedAt)
+        else setStatusNote(r.error)
+      }),
+    [],
+  )
+  useEffect(() => {
+    analysis.request(revision, doc)
+  }, [analysis, revision, doc])
+  const firstRevision = useRef(revision)
+  useEffect(() => {
+    if (revision !== firstRevision.current) autosaver.schedule(doc)
+  }, [autosaver, revision, doc])
+  useEffect(() => {
+    const flush = (): void => autosaver.flush()
+    window.addEventListener('beforeunload', flush)
+    window.addEventListener('pagehide', flush)
+    return () => {
+      window.removeEventListener('beforeunload', flush)
+      window.removeEventListener('pagehide', flush)
+      autosaver.flush()
+    }
+  }, [autosaver])
+
+  useEffect(() => {
+    try {
+      localStorage.setItem(UNITS_KEY, units)
+    } catch (_err) {
+      // Storage may be unavailable (private mode); the choice then lasts for this session only.
+    }
+  }, [units])
+
+  const openFile = useCallback(() => fileInput.current?.click(), [])
+  const saveFile = useCallback(() => {
+    const name = downloadProject(store.getState().doc)
+    setStatusNote(`Saved ${name}`)
+  }, [store])
+  const [replaceWith, setReplaceWith] = useState<'demo' | 'blank'>('demo')
+  const startFromDemo = useCallback(() => {
+    setReplaceWith('demo')
+    setBanner({ kind: 'confirm', title: 'Replace the current model with the demo building? Undo history is cleared.', lines: [] })
+  }, [])
+  const startBlank = useCallback(() => {
+    setReplaceWith('blank')
+    setBanner({ kind: 'confirm', title: 'Start a new, empty building? The current model is replaced and undo history is cleared.', lines: [] })
+  }, [])
+  const ctx: ActionContext = useMemo(
+    () => ({
+      store,
+      openFile,
+      saveFile,
+      startFromDemo,
+      startBlank,
+      fit: () => setFitRequest((n) => n + 1),
+      toggleOverlays: () => setShowOverlays((v) => !v),
+      toggleUnits: () => setUnits((u) => (u === 'SI' ? 'US' : 'SI')),
+    }),
+    [store, openFile, saveFile, startFromDemo, startBlank],
+  )
+
+  // Keyboard shortcuts from the action table; typing in a field is left alone.
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent): void => {
+      if (isTyping(e.target)) return
+      // While a gesture is in progress Enter and Backspace belong to the tool (finish, drop vertex).
+      if ((e.key === 'Enter' || e.key === 'Backspace') && store.getState().tool.state !== 'idle') {
+        e.preventDefault()
+        dispatch(store, { type: 'key', key: e.key, shift: e.shiftKey, alt: e.altKey })
+        return
+      }
+      const action = actionForKey(e)
+      if (action) {
+        e.preventDefault()
+        if (action.canRun(ctx)) action.run(ctx)
+        return
+      }
+    }
+    const onBlur = (): void => {
+      if (store.getState().tool.state !== 'idle') dispatch(store, { type: 'cancel' })
+    }
+    window.addEventListener('keydown', onKey)
+    window.addEventListener('blur', onBlur)
+    return () => {
+      window.removeEventListener('keydown', onKey)
+      window.removeEventListener('blur', onBlur)
+    }
+  }, [ctx, store])
+
+  const onOpenChange = async (e: ChangeEvent<HTMLInputElement>): Promise<void> => {
+    const file = e.target.files?.[0]
+    e.target.value = ''
+    if (!file) return
+    const text = await file.text()
+    const read = readProjectText(text, file.name)
+    if (!read.ok) {
+      setBanner({ kind: 'error', title: `[file] ${file.name} was not opened; your current model is unchanged.`, lines: read.errors })
+      return
+    }
+    loadDocument(store, read.project)
+    resetTool(store)
+    setFitRequest((n) => n + 1)
+    setBanner(read.warnings.length ? { kind: 'info', title: `Opened ${file.name}`, lines: read.warnings } : null)
+    setStatusNote(`Opened ${file.name}`)
+  }
+
+  const replaceModel = (): void => {
+    loadDocument(store, replaceWith === 'demo' ? demoProject() : blankProject())
+    resetTool(store)
+    setFitRequest((n) => n + 1)
+    setBanner(null)
+    setStatusNote(replaceWith === 'demo' ? 'Started from the demo building' : 'Started a new building')
+  }
+
+  // Pointer input from the plan, in plan metres, to the active tool.
+  const onPointer = useCallback(
+    (e: PlanPointerEvent) => {
+      const tolerance = PICK_PIXELS / e.pixelsPerMetre
+      const type = e.type === 'down' ? 'pointerDown' : e.type === 'up' ? 'pointerUp' : 'pointerMove'
+      if (e.type === 'leave') return
+      dispatch(store, { type, point: e.point, shift: e.shift, alt: e.alt, tolerance })
+    },
+    [store],
+  )
+
+  const run = (label: string, fn: () => { ok: boolean; message?: string }): string | null => {
+    mark(store, label)
+    const r = fn()
+    return r.ok ? null : (r.message ?? 'refused')
+  }
+  const floorActions: FloorActions = {
+    add: () => run('add floor', () => execute(store, 'addFloor', {})),
+    remove: (floor) => run('remove floor', () => execute(store, 'removeFloor', { floor })),
+    duplicate: (floor) => run('duplicate floor', () => execute(store, 'duplicateFloor', { floor })),
+    rename: (floor, name) => run('rename floor', () => execute(store, 'renameFloor', { floor, name })),
+    setHeight: (floor, height) => run('story height', () => execute(store, 'setFloorHeight', { floor, height })),
+    link: (floor, source) => run('typical floor', () => execute(store, 'linkTypicalFloor', { floor, source })),
+    unlink: (floor) => run('break typical link', () => execute(store, 'unlinkTypicalFloor', { floor })),
+  }
+  const onReplace = (_kind: InspectedKind, record: { readonly id: string }): string | null => {
+    const { id, ...patch } = record
+    return run('edit property', () => execute(store, 'updateElement', { id, patch: patch as never }))
+  }
+  const onCopyToFloors = (base: BaseRef, top: FloorId, move: boolean): string | null => {
+    const ids = store.getState().selection
+    return move
+      ? run('move to floors', () => execute(store, 'setElementFloorRange', { ids, base, top }))
+      : run('copy to floors', () => execute(store, 'copyElementsToFloors', { ids, base, top }))
+  }
+  const onPickIssue = (issue: Issue): void => {
+    const st = store.getState()
+    const floorRef = issue.floor ?? issue.refs.find((r) => st.doc.floors.some((f) => f.id === r))
+    if (floorRef && st.doc.floors.some((f) => f.id === floorRef) && floorRef !== st.currentFloor) {
+      setCurrentFloor(store, floorRef as FloorId)
+    }
+    setSelection(store, issue.refs)
+  }
+
+  const scene = useMemo(() => planScene(doc, floorId), [doc, floorId])
+  const bounds = useMemo(() => sceneBounds(doc, scene), [doc, scene])
+  const overlay = useMemo(() => floorOverlay(state.result, floorId), [state.result, floorId])
+  const handles = useMemo(
+    () => selectionHandles(doc, floorId, selection, (ROTATE_HANDLE_OFFSET * PICK_PIXELS) / viewScale),
+    [doc, floorId, selection, viewScale],
+  )
+  const preview = useMemo(() => previewOf(ephemeral.draft, wallThickness), [ephemeral.draft, wallThickness])
+  const readout = ephemeral.readout
+    ? tool.id === 'pick'
+      ? `Δx ${formatQuantity(ephemeral.readout.dx, 'length', units)} · Δy ${formatQuantity(ephemeral.readout.dy, 'length', units)}`
+      : `L ${formatQuantity(ephemeral.readout.length, 'length', units)} · ${formatQuantity(ephemeral.readout.angle, 'angle', units)}`
+    : ephemeral.draft?.kind === 'rotate'
+      ? `turn ${formatQuantity(ephemeral.draft.angle, 'angle', units)}`
+      : null
+  const snap = ephemeral.snap && ephemeral.snap.kind !== 'none' ? { at: ephemeral.snap.point, kind: ephemeral.snap.kind } : null
+
+  const numericMode = DRAWING_TOOLS.has(tool.id) ? 'length-angle' : tool.id === 'pick' && selection.length > 0 ? 'offset' : null
+  const submitNumeric = (): void => {
+    if (!numericMode) return
+    const parsed = parseNumericEntry(numericText, numericMode, fromDisplay(1, 'length', units))
+    if (!parsed.ok) {
+      setMessage(store, parsed.message)
+      return
+    }
+    dispatch(store, parsed.event)
+    setNumericText('')
+  }
+
+  const floor = doc.floors.find((f) => f.id === floorId)
+  const floorNumber = doc.floors.findIndex((f) => f.id === floorId) + 1
+  const canAction = (a: Action): boolean => {
+    if (a.id === 'undo') return canUndo
+    if (a.id === 'redo') return canRedo
+    if (a.id === 'delete') return selection.length > 0
+    return a.canRun(ctx)
+  }
+  const groups: { id: string; label: string; actions: Action[] }[] = [
+    { id: 'file', label: 'File', actions: ACTIONS.filter((a) => a.group === 'file') },
+    { id: 'edit', label: 'Edit', actions: ACTIONS.filter((a) => a.group === 'edit' && a.id !== 'cancel') },
+    { id: 'tool', label: 'Draw', actions: ACTIONS.filter((a) => a.group === 'tool') },
+    { id: 'view', label: 'View', actions: ACTIONS.filter((a) => a.group === 'view' && a.id !== 'units') },
+  ]
+  const issues = state.result?.issues ?? []
+
+  return (
+    <div className="app" data-testid="app">
+      <header className="topbar" role="toolbar" aria-label="Actions">
+        <span className="brand">Gyre</span>
+        {groups.map((g) => (
+          <div className="group" key={g.id} role="group" aria-label={g.label}>
+            {g.actions.map((a) => (
+              <button
+                key={a.id}
+                type="button"
+                data-testid={`action-${a.id}`}
+                disabled={!canAction(a)}
+                aria-pressed={a.tool ? tool.id === a.tool : a.id === 'overlays' ? showOverlays : undefined}
+                title={a.shortcut ? `${a.label} (${a.shortcut})` : a.label}
+                onClick={() => a.run(ctx)}
+              >
+                {a.label}
+              </button>
+            ))}
+          </div>
+        ))}
+        <div className="group" role="group" aria-label="Units">
+          {(['SI', 'US'] as const).map((u) => (
+            <button key={u} type="button" data-testid={`units-${u}`} aria-pressed={units === u} onClick={() => setUnits(u)}>
+              {u === 'SI' ? 'SI (kN, m)' : 'US (kip, ft)'}
+            </button>
+          ))}
+        </div>
+        <input ref={fileInput} type="file" accept=".json,application/json" data-testid="file-input" hidden onChange={(e) => void onOpenChange(e)} />
+      </header>
+      {banner ? (
+        <div className={`banner ${banner.kind === 'error' ? '' : 'info'}`} role={banner.kind === 'error' ? 'alert' : 'status'} data-testid={`banner-${banner.kind}`}>
+          <strong>{banner.title}</strong>
+          {banner.lines.length ? (
+            <ul>
+              {banner.lines.map((l, i) => (
+                <li key={i}>{l}</li>
+              ))}
+            </ul>
+          ) : null}
+          {banner.kind === 'confirm' ? (
+            <>
+              {' '}
+              <button type="button" data-testid="confirm-replace" onClick={replaceModel}>
+                {replaceWith === 'demo' ? 'Replace with demo' : 'Start new'}
+              </button>{' '}
+              <button type="button" onClick={() => setBanner(null)}>
+                Keep my model
+              </button>
+            </>
+          ) : (
+            <>
+              {' '}
+              <button type="button" data-testid="banner-close" onClick={() => setBanner(null)}>
+                Close
+              </button>
+            </>
+          )}
+        </div>
+      ) : null}
+      <div className="workspace">
+        <aside className="side">
+          <ErrorBoundary name="Floors">
+            <FloorStack project={doc} current={floorId} units={units} onSelect={(f) => setCurrentFloor(store, f)} actions={floorActions} />
+          </ErrorBoundary>
+        </aside>
+        <main className="center">
+          <div className="views">
+            <ErrorBoundary name="Plan">
+              <div className="plan-wrap" style={{ position: 'relative', minWidth: 0, minHeight: 0, display: 'grid' }}>
+                <PlanCanvas
+                  project={doc}
+                  scene={scene}
+                  bounds={bounds}
+                  units={units}
+                  selection={new Set(selection)}
+                  overlay={overlay}
+                  overlayStale={state.isStale || state.error !== null}
+                  showOverlays={showOverlays}
+                  preview={preview}
+                  snap={snap}
+                  handles={handles}
+                  readout={readout}
+                  fitRequest={fitRequest}
+                  cursor={tool.id === 'pick' ? 'default' : 'crosshair'}
+                  onPointer={onPointer}
+                  onViewChange={onViewChange}
+                />
+                <div className="plan-note" data-testid="plan-floor">
+                  {floor ? `Floor ${floorNumber}: ${floor.name}` : ''}
+                  {scene.slabsLinked ? ' · slabs and masses as typical floor' : ''}
+                </div>
+                {numericMode ? (
+                  <form
+                    className="numeric-entry"
+                    data-testid="numeric-entry"
+                    onSubmit={(e) => {
+                      e.preventDefault()
+                      submitNumeric()
+                    }}
+                  >
+                    <label htmlFor="numeric-input">{numericMode === 'offset' ? 'Move by Δx, Δy' : 'Length, angle°'}</label>
+                    <input
+                      id="numeric-input"
+                      data-testid="numeric-input"
+                      type="text"
+                      value={numericText}
+                      placeholder={numericMode === 'offset' ? (units === 'SI' ? '1.5, 0' : '5, 0') : units === 'SI' ? '6, 90' : '20, 90'}
+                      onChange={(e) => setNumericText(e.target.value)}
+                      onKeyDown={(e) => {
+                        if (e.key === 'Escape') {
+                          setNumericText('')
+                          ;(e.target as HTMLInputElement).blur()
+                        }
+                      }}
+                    />
+                    <button type="submit">Apply</button>
+                  </form>
+                ) : null}
+              </div>
+            </ErrorBoundary>
+            <div className="viewer-slot">
+              <ErrorBoundary name="3D view">
+                <ViewerPane project={doc} result={state.result} isStale={state.isStale || state.error !== null} />
+              </ErrorBoundary>
+            </div>
+          </div>
+          <div className="lower">
+            <ErrorBoundary name="Problems">
+              <ProblemsPanel issues={issues} analysisError={state.error} notices={message ? [message] : []} onPick={onPickIssue} />
+            </ErrorBoundary>
+            <ErrorBoundary name="Results">
+              <ResultsPanel project={doc} result={state.result} isStale={state.isStale} units={units} />
+            </ErrorBoundary>
+          </div>
+        </main>
+        <aside className="side right">
+          <ErrorBoundary name="Inspector">
+            <Inspector
+              project={doc}
+              selection={selection}
+              units={units}
+              onReplace={onReplace}
+              onDelete={() => {
+                const ids = store.getState().selection
+                if (ids.length) run('delete', () => execute(store, 'deleteElements', { ids }))
+              }}
+              onCopyToFloors={onCopyToFloors}
+              copyMessage={null}
+            />
+          </ErrorBoundary>
+        </aside>
+      </div>
+      <StatusLine
+        analysis={state}
+        message={message ?? statusNote}
+        autosavedAt={autosavedAt}
+        floorLabel={floor ? `Floor ${floorNumber} of ${doc.floors.length}` : ''}
+        toolLabel={`${ACTIONS.find((a) => a.tool === tool.id)?.label ?? tool.id} · ${tool.state}`}
+        selectionCount={selection.length}
+      />
+    </div>
+  )
+}
+
+/** Start-up document: the autosaved model when there is a valid one, else the demo building. */
+export function initialProject(restored: Project | null): Project {
+  return restored ?? demoProject()
+}
