@@ -98,11 +98,18 @@ export function computeCentres(structure: Structure, solver: StiffnessSolver): F
     const F = flex[fl.index]!
     const cr = rigidityPoint(F)
     const ftt = F[8]!
-    const Kj = invert3(F) ?? new Float64Array(9).fill(Number.NaN)
+    // K_j = inv(F_j): its u_x/u_y terms do not depend on the reference point, so invert F moved to the
+    // CR (where it has no theta-u coupling) instead of F at O, which is ill-conditioned far from O.
+    const px = cr.x
+    const py = cr.y
+    const a = F[0]! - 2 * py * F[2]! + py * py * ftt
+    const b = F[4]! + 2 * px * F[5]! + px * px * ftt
+    const c = F[1]! + px * F[2]! - py * F[5]! - px * py * ftt
+    const det = a * b - c * c
     const kTheta = 1 / ftt
-    const kxx = Kj[0]!
-    const kyy = Kj[4]!
-    const kxy = Kj[1]!
+    const kxx = b / det
+    const kyy = a / det
+    const kxy = -c / det
     return {
       floorId: fl.id,
       centreOfMass: fl.centreOfMass,
