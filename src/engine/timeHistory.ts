@@ -101,6 +101,7 @@ export function runTimeHistory(
   const steps = motion.ax.length
   const n = structure.dofCount
   const count = modes.count
+  // Modal coordinates step-major (q[s * count + m]) so the reconstruction reads them in order.
   const q = new Float64Array(count * steps)
   const load = new Float64Array(steps)
   for (let m = 0; m < count; m++) {
@@ -111,7 +112,8 @@ export function runTimeHistory(
     for (let s = 0; s < steps; s++) load[s] = -(gx * motion.ax[s]! + gy * motion.ay[s]!)
     const T = (2 * Math.PI) / w
     const substeps = Math.min(MAX_SUBSTEPS, Math.max(1, Math.ceil(motion.dt / (T / 10))))
-    q.set(newmarkSdof(w, zeta, motion.dt, load, { substeps }).u, m * steps)
+    const qm = newmarkSdof(w, zeta, motion.dt, load, { substeps }).u
+    for (let s = 0; s < steps; s++) q[s * count + m] = qm[s]!
   }
   const stride = Math.max(1, Math.ceil(steps / MAX_OUTPUT_STEPS))
   const stored = Math.ceil(steps / stride)
@@ -123,20 +125,23 @@ export function runTimeHistory(
   const peakY = new Float64Array(nf)
   const peakR = new Float64Array(nf)
   const u = new Float64Array(n)
+  const cmX = Float64Array.from(structure.floors, (f) => f.centreOfMass.x)
+  const cmY = Float64Array.from(structure.floors, (f) => f.centreOfMass.y)
+  const shapes = modes.shapes
   for (let s = 0; s < steps; s++) {
     u.fill(0)
     for (let m = 0; m < count; m++) {
-      const qm = q[m * steps + s]!
+      const qm = q[s * count + m]!
       if (qm === 0) continue
       const o = m * n
-      for (let i = 0; i < n; i++) u[i]! += modes.shapes[o + i]! * qm
+      for (let i = 0; i < n; i++) u[i]! += shapes[o + i]! * qm
     }
-    structure.floors.forEach((f, i) => {
+    for (let i = 0; i < nf; i++) {
       const th = u[3 * i + 2]!
-      peakX[i] = Math.max(peakX[i]!, Math.abs(u[3 * i]! - th * f.centreOfMass.y))
-      peakY[i] = Math.max(peakY[i]!, Math.abs(u[3 * i + 1]! + th * f.centreOfMass.x))
+      peakX[i] = Math.max(peakX[i]!, Math.abs(u[3 * i]! - th * cmY[i]!))
+      peakY[i] = Math.max(peakY[i]!, Math.abs(u[3 * i + 1]! + th * cmX[i]!))
       peakR[i] = Math.max(peakR[i]!, Math.abs(th))
-    })
+    }
     if (s % stride === 0) {
       const k = s / stride
       displacements.set(u, k * n)
