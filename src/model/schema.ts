@@ -57,9 +57,13 @@ export const LIMITS = {
   modulusMax: 1e13,
   factorMin: 0.001,
   factorMax: 10,
+  secondMomentMin: 1e-12,
   secondMomentMax: 100,
+  storyStiffnessMin: 1,
   storyStiffnessMax: 1e14,
+  braceAreaMin: 1e-8,
   braceAreaMax: 10,
+  massMin: 1e-3,
   bayWidthMin: 0.1,
   bayWidthMax: 1000,
   countMax: 1000,
@@ -170,6 +174,8 @@ interface NumberRule {
   /** exclusive upper bound */
   readonly lt?: number
   readonly integer?: boolean
+  /** Sanity floor for values that may be 0: 0 is fine, anything in (0, positiveMin) is refused. */
+  readonly positiveMin?: number
   /** Used when the field is absent. */
   readonly fallback?: number
 }
@@ -188,7 +194,11 @@ function num(ctx: Ctx, path: string, v: unknown, rule: NumberRule = {}): number 
   if (rule.max !== undefined && !(v <= rule.max)) {
     return fail(ctx, path, `must be <= ${rule.max}, got ${v}`)
   }
-  return v
+  if (rule.positiveMin !== undefined && v > 0 && v < rule.positiveMin) {
+    return fail(ctx, path, `must be 0 or >= ${rule.positiveMin}, got ${v}`)
+  }
+  // -0 would not survive a save (JSON writes it as 0); store the value the file will hold.
+  return v === 0 ? 0 : v
 }
 
 function str(ctx: Ctx, path: string, v: unknown, fallback?: string): string | undefined {
@@ -569,7 +579,11 @@ function readSlab(ctx: Ctx, p: string, id: string, o: Record<string, unknown>, r
   const floor = floorRef(ctx, key(p, 'floor'), o.floor, refs)
   const outline = polygon(ctx, key(p, 'outline'), o.outline)
   const rawOpenings = list(ctx, key(p, 'openings'), o.openings, [])
-  const areaMass = num(ctx, key(p, 'areaMass'), o.areaMass, { min: 0, max: LIMITS.areaMassMax })
+  const areaMass = num(ctx, key(p, 'areaMass'), o.areaMass, {
+    min: 0,
+    positiveMin: LIMITS.massMin,
+    max: LIMITS.areaMassMax,
+  })
   const openings: Point[][] = []
   let openingsOk = rawOpenings !== undefined
   rawOpenings?.forEach((r, i) => {
@@ -616,6 +630,7 @@ function readLineMass(
   const raw = list(ctx, key(p, 'points'), o.points)
   const massPerLength = num(ctx, key(p, 'massPerLength'), o.massPerLength, {
     min: 0,
+    positiveMin: LIMITS.massMin,
     max: LIMITS.massPerLengthMax,
   })
   let points: Point[] | undefined
@@ -641,11 +656,19 @@ function readPointMass(
 ): PointMass | undefined {
   const floor = floorRef(ctx, key(p, 'floor'), o.floor, refs)
   const where = point(ctx, key(p, 'at'), o.at)
-  const mass = num(ctx, key(p, 'mass'), o.mass, { min: 0, max: LIMITS.pointMassMax })
+  const mass = num(ctx, key(p, 'mass'), o.mass, {
+    min: 0,
+    positiveMin: LIMITS.massMin,
+    max: LIMITS.pointMassMax,
+  })
   const polarInertia =
     o.polarInertia === undefined
       ? undefined
-      : num(ctx, key(p, 'polarInertia'), o.polarInertia, { min: 0, max: LIMITS.polarInertiaMax })
+      : num(ctx, key(p, 'polarInertia'), o.polarInertia, {
+          min: 0,
+          positiveMin: LIMITS.massMin,
+          max: LIMITS.polarInertiaMax,
+        })
   if (floor === undefined || !where || mass === undefined) return undefined
   if (o.polarInertia !== undefined && polarInertia === undefined) return undefined
   return {
@@ -718,8 +741,9 @@ function readFrameStiffness(
   const kind = oneOf(ctx, key(p, 'kind'), v.kind, ['direct', 'moment', 'braced'] as const)
   if (kind === undefined) return undefined
   const before = ctx.errors.length
-  const kRule = { gt: 0, max: LIMITS.storyStiffnessMax }
+  const kRule = { gt: 0, min: LIMITS.storyStiffnessMin, max: LIMITS.storyStiffnessMax }
   const bayRule = { gt: 0, min: LIMITS.bayWidthMin, max: LIMITS.bayWidthMax }
+  const iRule = { gt: 0, min: LIMITS.secondMomentMin, max: LIMITS.secondMomentMax }
   switch (kind) {
     case 'direct': {
       const o = object(ctx, p, v, ['kind', 'storyStiffness', 'stories'])!
@@ -738,8 +762,8 @@ function readFrameStiffness(
       const o = object(ctx, p, v, ['kind', 'bays', 'bayWidth', 'columnI', 'beamI', 'material'])!
       const bays = num(ctx, key(p, 'bays'), o.bays, { integer: true, min: 1, max: LIMITS.countMax })
       const bayWidth = num(ctx, key(p, 'bayWidth'), o.bayWidth, bayRule)
-      const columnI = num(ctx, key(p, 'columnI'), o.columnI, { gt: 0, max: LIMITS.secondMomentMax })
-      const beamI = num(ctx, key(p, 'beamI'), o.beamI, { gt: 0, max: LIMITS.secondMomentMax })
+      const columnI = num(ctx, key(p, 'columnI'), o.columnI, iRule)
+      const beamI = num(ctx, key(p, 'beamI'), o.beamI, iRule)
       const material = materialRef(ctx, key(p, 'material'), o.material, refs)
       if (ctx.errors.length > before) return undefined
       return {
@@ -755,7 +779,11 @@ function readFrameStiffness(
       const o = object(ctx, p, v, ['kind', 'braces', 'bayWidth', 'braceArea', 'material'])!
       const braces = num(ctx, key(p, 'braces'), o.braces, { integer: true, min: 1, max: LIMITS.countMax })
       const bayWidth = num(ctx, key(p, 'bayWidth'), o.bayWidth, bayRule)
-      const braceArea = num(ctx, key(p, 'braceArea'), o.braceArea, { gt: 0, max: LIMITS.braceAreaMax })
+      const braceArea = num(ctx, key(p, 'braceArea'), o.braceArea, {
+        gt: 0,
+        min: LIMITS.braceAreaMin,
+        max: LIMITS.braceAreaMax,
+      })
       const material = materialRef(ctx, key(p, 'material'), o.material, refs)
       if (ctx.errors.length > before) return undefined
       return {
@@ -806,7 +834,7 @@ function readColumn(ctx: Ctx, p: string, id: string, o: Record<string, unknown>,
   const name = str(ctx, key(p, 'name'), o.name, id)
   const where = point(ctx, key(p, 'at'), o.at)
   const angle = num(ctx, key(p, 'angle'), o.angle, { min: -1000, max: 1000, fallback: 0 })
-  const iRule = { min: 0, max: LIMITS.secondMomentMax }
+  const iRule = { min: 0, positiveMin: LIMITS.secondMomentMin, max: LIMITS.secondMomentMax }
   const Ix = num(ctx, key(p, 'Ix'), o.Ix, iRule)
   const Iy = num(ctx, key(p, 'Iy'), o.Iy, iRule)
   const material = materialRef(ctx, key(p, 'material'), o.material, refs)
