@@ -5,6 +5,9 @@
  */
 export { analyzeProject } from './analyze'
 export { balanceScore, suggestBalance } from './balance'
+export { BUILT_IN_CRITERION_SETS } from './criteria'
+export type { BuiltInCriterionSet } from './criteria'
+export { GRAVITY, spectralAcceleration } from './spectra'
 export type { BalanceAction, BalanceOptions, BalanceResult, BalanceSuggestion } from './balance'
 export type {
   AnalysisOptions,
