@@ -102,35 +102,59 @@ export function createStiffnessSolver(
   let minRatio = Number.POSITIVE_INFINITY
   let minRatioDof = -1
   const absTol = 1e-12 * maxDiag
-  for (let i = 0; i < n; i++) {
+  // Pivot of row r once its entries left of the diagonal are final; a failed pivot records the free
+  // shape and removes the DOF (as if held) so that further, independent mechanisms are found too.
+  const finishPivot = (r: number): void => {
+    const rr = r * n
+    let d = A[rr + r]!
+    for (let k = 0; k < r; k++) d -= A[rr + k]! * A[rr + k]!
+    const dr = diag[r]!
+    if (!(d > mechTol * dr) || !(dr > absTol)) {
+      failures.push({ dof: r, shape: nullShape(A, n, r, removed) })
+      removed[r] = 1
+      for (let k = 0; k < r; k++) A[rr + k] = 0
+      A[rr + r] = 1
+      return
+    }
+    const ratio = d / dr
+    if (ratio < minRatio) {
+      minRatio = ratio
+      minRatioDof = r
+    }
+    A[rr + r] = Math.sqrt(d)
+  }
+  // Rows are processed in pairs that share every load of row j (about 1.7x faster than one row).
+  for (let i = 0; i < n; i += 2) {
     const ri = i * n
+    const pair = i + 1 < n
+    const ri1 = pair ? ri + n : ri
     for (let j = 0; j < i; j++) {
       if (removed[j]) {
         A[ri + j] = 0
+        A[ri1 + j] = 0
         continue
       }
       const rj = j * n
-      let s = A[ri + j]!
-      for (let k = 0; k < j; k++) s -= A[ri + k]! * A[rj + k]!
-      A[ri + j] = s / A[rj + j]!
+      let s0 = A[ri + j]!
+      let s1 = A[ri1 + j]!
+      for (let k = 0; k < j; k++) {
+        const l = A[rj + k]!
+        s0 -= A[ri + k]! * l
+        s1 -= A[ri1 + k]! * l
+      }
+      const djj = A[rj + j]!
+      A[ri + j] = s0 / djj
+      if (pair) A[ri1 + j] = s1 / djj
     }
-    let d = A[ri + i]!
-    for (let k = 0; k < i; k++) d -= A[ri + k]! * A[ri + k]!
-    const di = diag[i]!
-    const ratio = di > 0 ? d / di : 0
-    if (!(d > mechTol * di) || !(di > absTol)) {
-      failures.push({ dof: i, shape: nullShape(A, n, i, removed) })
-      // Remove the DOF (as if held) so that further, independent mechanisms are found too.
-      removed[i] = 1
-      for (let k = 0; k < i; k++) A[ri + k] = 0
-      A[ri + i] = 1
-      continue
+    finishPivot(i)
+    if (!pair) continue
+    if (removed[i]) A[ri1 + i] = 0
+    else {
+      let s = A[ri1 + i]!
+      for (let k = 0; k < i; k++) s -= A[ri1 + k]! * A[ri + k]!
+      A[ri1 + i] = s / A[ri + i]!
     }
-    if (ratio < minRatio) {
-      minRatio = ratio
-      minRatioDof = i
-    }
-    A[ri + i] = Math.sqrt(d)
+    finishPivot(i + 1)
   }
 
   if (failures.length > 0) {
@@ -289,7 +313,44 @@ function scaledFlexibilityBlock(
     w1[r] = -(L[rr + c + 1]! * w1[c + 1]!) / L[rr + r]!
     w2[r] = 1 / L[rr + r]!
   }
-  for (let r = c + 3; r < n; r++) {
+  // Rows in pairs share the loads of w (row r+1 needs w[r] last, added after row r is finished).
+  let r = c + 3
+  for (; r + 1 < n; r += 2) {
+    const rr = r * n
+    const rr1 = rr + n
+    let s0 = 0
+    let s1 = 0
+    let s2 = 0
+    let t0 = 0
+    let t1 = 0
+    let t2 = 0
+    for (let k = c; k < r; k++) {
+      const a = w0[k]!
+      const b = w1[k]!
+      const e = w2[k]!
+      const l = L[rr + k]!
+      const m = L[rr1 + k]!
+      s0 += l * a
+      s1 += l * b
+      s2 += l * e
+      t0 += m * a
+      t1 += m * b
+      t2 += m * e
+    }
+    const d = L[rr + r]!
+    const a = -s0 / d
+    const b = -s1 / d
+    const e = -s2 / d
+    w0[r] = a
+    w1[r] = b
+    w2[r] = e
+    const m = L[rr1 + r]!
+    const d1 = L[rr1 + r + 1]!
+    w0[r + 1] = -(t0 + m * a) / d1
+    w1[r + 1] = -(t1 + m * b) / d1
+    w2[r + 1] = -(t2 + m * e) / d1
+  }
+  for (; r < n; r++) {
     const rr = r * n
     let s0 = 0
     let s1 = 0
