@@ -1061,8 +1061,8 @@ function readSettings(ctx: Ctx, v: unknown): AnalysisSettings | undefined {
   if (!o) return undefined
   const before = ctx.errors.length
   const d = DEFAULT_SETTINGS
-  let criterionSet = str(ctx, 'settings.criterionSet', o.criterionSet, d.criterionSet)
-  if (criterionSet === '') criterionSet = fail(ctx, 'settings.criterionSet', 'must not be empty')
+  // '' or 'none' selects no set (ratios are still computed; see docs/criteria.md).
+  const criterionSet = str(ctx, 'settings.criterionSet', o.criterionSet, d.criterionSet)
   let criterionSets: CriterionSetSpec[] | undefined
   if (o.criterionSets !== undefined) {
     const raw = list(ctx, 'settings.criterionSets', o.criterionSets)
