@@ -199,3 +199,16 @@ describe('evaluateRegularity', () => {
     expect(evaluateRegularity(s, centres, set)).toBeNull()
   })
 })
+
+describe('torsionCheckRows without movement', () => {
+  it('marks a story with no drift at the extreme points as not applicable', () => {
+    const set = resolveCriterionSet(settings()).set!
+    const still: StoryTorsionRow = { ...row(1), driftMax: 0, driftAvg: 0, driftRatio: 1 }
+    const rows = torsionCheckRows(set, [{ caseId: 'X+e', row: still }])
+    // common practice: a ratio of two zero drifts carries no information
+    expect(rows.filter((w) => w.comparison).map((w) => w.verdict)).toEqual([
+      'not-applicable',
+      'not-applicable',
+    ])
+  })
+})

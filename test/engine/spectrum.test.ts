@@ -11,7 +11,9 @@ import {
   spectralAcceleration,
   tableOrdinate,
 } from '@/engine/spectra'
+import { generateDemoMotion } from '@/engine/groundMotion'
 import { pointDisplacement } from '@/engine/loads'
+import { newmarkSdof, runTimeHistory } from '@/engine/timeHistory'
 import {
   buildTestStructure,
   denseModes,
@@ -265,3 +267,42 @@ describe('runSpectrum through analyzeProject', () => {
     })
   })
 })
+
+describe('runSpectrum against a time history', () => {
+  it('equals the time-history peak for one mode with the own spectrum of the motion', () => {
+    // A linear SDOF's peak is by definition its response-spectrum ordinate D = Sa / omega²
+    // (Chopra, Dynamics of Structures, §6.6, from memory). Build the 5 % pseudo-acceleration
+    // spectrum of the demo motion at the building's x period, then compare both analyses.
+    const k = 1e7
+    const s = buildTestStructure(
+      [{ mass: 1e5, L: 20, B: 10, height: 3 }],
+      [
+        shearElement({ x: 0, y: 0 }, { x: 0, y: 1 }, [k]),
+        shearElement({ x: 20, y: 0 }, { x: 0, y: 1 }, [k]),
+        shearElement({ x: 0, y: 0 }, { x: 1, y: 0 }, [k]),
+        shearElement({ x: 0, y: 10 }, { x: 1, y: 0 }, [k]),
+      ],
+    )
+    const modes = denseModes(s)
+    const motion = { kind: 'generated' as const, pga: 0.3, duration: 20, seed: 12, yFactor: 0 }
+    const th = runTimeHistory(s, modes, settings({ groundMotion: motion }))
+    const omega = Math.sqrt((2 * k) / 1e5)
+    const T = (2 * Math.PI) / omega
+    const g = generateDemoMotion(motion)
+    const substeps = Math.ceil(g.dt / (T / 10))
+    const D = maxAbsOf(newmarkSdof(omega, 0.05, g.dt, g.ax.map((v) => -v), { substeps }).u)
+    const saG = (omega * omega * D) / GRAVITY
+    const points: [number, number][] = [
+      [T * 0.999, saG],
+      [T * 1.001, saG],
+    ]
+    const rs = runSpectrum(s, modes, settings({ spectrum: { kind: 'table', points } }))
+    expect(rs.excitationX[0]!.displacementCqc.x / th.peaks[0]!.x).toBeCloseTo(1, 6)
+  })
+})
+
+function maxAbsOf(a: ArrayLike<number>): number {
+  let m = 0
+  for (let i = 0; i < a.length; i++) m = Math.max(m, Math.abs(a[i]!))
+  return m
+}

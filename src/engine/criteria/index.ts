@@ -227,12 +227,17 @@ export function torsionCheckRows(
   for (const { caseId, row } of inputs) {
     const ratio = onDisplacement ? row.displacementRatio : row.driftRatio
     const classify = (): string => {
+      if (empty) return 'no movement at extreme points'
       if (set.extremeRatio !== undefined && ratio > set.extremeRatio) return labels.extreme
       if (set.irregularRatio !== undefined && ratio > set.irregularRatio) return labels.irregular
       return labels.regular
     }
+    // A story without extreme points (no slab outline) or without any movement has no ratio.
+    const empty = onDisplacement
+      ? row.displacementMax === 0 && row.displacementAvg === 0
+      : row.driftMax === 0 && row.driftAvg === 0
     const verdictFor = (limit: number): Verdict =>
-      isRatio(ratio) ? (ratio <= limit ? 'pass' : 'fail') : 'not-applicable'
+      !empty && isRatio(ratio) ? (ratio <= limit ? 'pass' : 'fail') : 'not-applicable'
     if (set.irregularRatio !== undefined) {
       rows.push({
         floorId: row.floorId,
