@@ -2,7 +2,10 @@ import { boxSelect, normalizeBox } from '../../geometry/hitTest'
 import { EMPTY_EPHEMERAL, setSelection } from '../../store'
 import type { ToolStateNode } from '../types'
 
-/** Dragging a selection box from empty space; Shift adds to the selection; Escape restores it. */
+/**
+ * Dragging a selection box from empty space (or from inside an unselected slab, where a plain click
+ * selects the slab); Shift adds to the selection; Escape restores it.
+ */
 export const PickBoxing: ToolStateNode = {
   id: 'boxing',
   onPointerMove(ctx, e) {
@@ -12,11 +15,14 @@ export const PickBoxing: ToolStateNode = {
     ctx.setEphemeral({ draft: { kind: 'box', min, max } })
   },
   onPointerUp(ctx, e) {
-    const { origin, baseSelection, shift } = ctx.memory()
+    const { origin, baseSelection, shift, pressedId } = ctx.memory()
+    const base = shift ? (baseSelection ?? []) : []
     if (origin && Math.hypot(e.point.x - origin.x, e.point.y - origin.y) > ctx.tolerance(e)) {
       const { doc, currentFloor } = ctx.state()
-      const ids = boxSelect(doc, currentFloor, origin, e.point)
-      setSelection(ctx.store, shift ? [...(baseSelection ?? []), ...ids] : ids)
+      setSelection(ctx.store, [...base, ...boxSelect(doc, currentFloor, origin, e.point)])
+    } else if (pressedId !== undefined) {
+      // A click (no drag) inside a slab selects it.
+      setSelection(ctx.store, [...base, pressedId])
     }
     ctx.setEphemeral({ ...EMPTY_EPHEMERAL, pointer: e.point })
     ctx.transition('idle', {})

@@ -31,6 +31,12 @@ export const PickIdle: ToolStateNode = {
       return
     }
     const hit = hitTest(doc, currentFloor, e.point, tol)
+    // Inside an unselected slab a drag draws a box (slabs cover the plan); a click still picks the slab.
+    if (hit && hit.kind === 'slabs' && hit.distance === 0 && !selection.includes(hit.id)) {
+      if (!e.shift) setSelection(ctx.store, [])
+      ctx.transition('boxing', { origin: e.point, baseSelection: selection, shift: e.shift === true, pressedId: hit.id })
+      return
+    }
     if (hit) {
       const selected = selection.includes(hit.id)
       if (e.shift) {
