@@ -66,6 +66,14 @@ export default tseslint.config(
     },
   },
   {
+    files: ['src/report/**'],
+    rules: {
+      // Reports are pure text builders shared by the CLI and the UI: no DOM, no UI libraries.
+      'no-restricted-imports': ban(uiLibs, ['@/editor*', '@/viewer*', '@/ui*', '@/cli*']),
+      'no-restricted-globals': ['error', 'window', 'document'],
+    },
+  },
+  {
     files: ['src/viewer/**'],
     rules: { 'no-restricted-imports': ban([], ['@/ui*', '@/cli*']) },
   },
