@@ -122,11 +122,11 @@ export function buildStructure(project: Project): {
 
   const n = DOFS_PER_FLOOR * N
   const K = new Float64Array(n * n)
+  const usedElements: AssembledElement[] = []
   for (const element of elements) {
     let finite = element.map.every(Number.isFinite)
-    for (let i = 0; finite && i < element.stiffness.length; i++) {
-      finite = Number.isFinite(element.stiffness[i])
-    }
+    const k = element.stiffness
+    for (let i = 0; finite && i < k.length; i++) finite = Number.isFinite(k[i])
     if (!finite) {
       issues.push({
         code: 'invalid-model',
@@ -137,8 +137,8 @@ export function buildStructure(project: Project): {
       continue
     }
     scatterElement(K, n, element)
+    usedElements.push(element)
   }
-  const usedElements = elements.filter((e) => e.map.every(Number.isFinite) && e.stiffness.every(Number.isFinite))
 
   const M = new Float64Array(n * n)
   let totalMass = 0
