@@ -337,7 +337,29 @@ function jsonReplacer(_key: string, value: unknown): unknown {
   return value
 }
 
+/** Top-level field order of the JSON (docs/results-format.md); fields not listed follow. */
+const JSON_LEAD = [
+  'status',
+  'caution',
+  'projectName',
+  'issues',
+  'totalMass',
+  'buildingCentreOfMass',
+  'floors',
+  'centres',
+  'modes',
+  'torsion',
+  'regularity',
+  'spectrum',
+  'timeHistory',
+  'timings',
+] as const
+
 /** The full AnalysisResult as 2-space JSON (SI units; see docs/results-format.md). */
 export function formatResultJson(result: AnalysisResult): string {
-  return `${JSON.stringify(result, jsonReplacer, 2)}\n`
+  const rest = Object.fromEntries(
+    Object.entries(result).filter(([k]) => !(JSON_LEAD as readonly string[]).includes(k)),
+  )
+  const ordered = { ...Object.fromEntries(JSON_LEAD.map((k) => [k, result[k]])), ...rest }
+  return `${JSON.stringify(ordered, jsonReplacer, 2)}\n`
 }

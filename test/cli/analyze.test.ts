@@ -154,3 +154,29 @@ describe('the analyze script (node process)', () => {
     expect(p.stderr).toContain('error mechanism:')
   })
 })
+
+describe('docs/results-format.md', () => {
+  it('documents every field name that --json prints for the demo with a time history', () => {
+    const r = run(['--json', '--time-history'])
+    expect(r.code).toBe(EXIT_OK)
+    const doc = readFileSync(`${root}docs/results-format.md`, 'utf8')
+    const names = new Set<string>()
+    const walk = (v: unknown): void => {
+      if (Array.isArray(v)) {
+        if (v.length > 0) walk(v[0])
+      } else if (v !== null && typeof v === 'object') {
+        for (const [k, x] of Object.entries(v)) {
+          names.add(k)
+          walk(x)
+        }
+      }
+    }
+    walk(JSON.parse(r.out))
+    // Keys of timings are stage names, not fields.
+    // A field is documented when it appears as a word inside a code span (`name` or `{ name, ... }`).
+    const spans = [...doc.matchAll(/`([^`]+)`/g)].map((m) => m[1] as string).join(' ')
+    const stage = /^(assemble|factor|modes|centres|torsion|spectrum|timeHistory)$/
+    const missing = [...names].filter((k) => !new RegExp(`\\b${k}\\b`).test(spans) && !stage.test(k))
+    expect(missing).toEqual([])
+  })
+})
