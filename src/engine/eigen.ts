@@ -39,6 +39,11 @@ export interface EigenOptions {
    * Default: X and Y translation.
    */
   readonly loads?: readonly Float64Array[]
+  /**
+   * Lowest-mode method: u = K^-1 f from an existing factorization of K (e.g. the stiffness solver's);
+   * without it the method factors A itself.
+   */
+  readonly solveStiffness?: (rhs: Float64Array) => Float64Array
 }
 
 /** Eigen solution at O: eigenvalues omega² ascending, vectors mode-major and M-normalized. */
@@ -600,8 +605,14 @@ export function choleskySolveRows(L: Float64Array, n: number, B: Float64Array, c
  * of eigenvalues of A below sigma (Sylvester's law of inertia). Returns null when a pivot is so small
  * that the count is not reliable (the caller moves the shift).
  */
-export function sturmCount(A: Float64Array, n: number, sigma: number): number | null {
-  const L = new Float64Array(n * n)
+export function sturmCount(
+  A: Float64Array,
+  n: number,
+  sigma: number,
+  work?: Float64Array,
+): number | null {
+  // `work` (n² long) is reused for the factor when the caller has a spare buffer
+  const L = work && work.length >= n * n ? work : new Float64Array(n * n)
   const D = new Float64Array(n)
   const w = new Float64Array(n)
   let scale = 0
@@ -732,9 +743,42 @@ function solveLowest(form: StandardForm, M: Float64Array, options: EigenOptions)
     options.periodCutoff && options.periodCutoff > 0 ? (2 * Math.PI / options.periodCutoff) ** 2 : 0
   // Small problems: the dense solver is exact and cheaper than the bookkeeping below.
   if (n <= 3 * Math.max(minCount, 8)) return null
-  const chol = choleskyFactor(form.A, n)
-  if (!chol.L) return null
-  const L = chol.L
+  let L: Float64Array | null = null
+  const solveK = options.solveStiffness
+  if (!solveK) {
+    L = choleskyFactor(form.A, n).L
+    if (!L) return null
+  }
+  const S = form.S
+  const y = new Float64Array(n)
+  /** rows <- A^-1 rows: own Cholesky of A, or S^-1 K^-1 S^-T with the given stiffness solve. */
+  const applyInverse = (rows: Float64Array, count: number): void => {
+    if (L) {
+      choleskySolveRows(L, n, rows, count)
+      return
+    }
+    for (let v = 0; v < count; v++) {
+      const o = v * n
+      for (let f = 0; f < nf; f++) {
+        const i = o + 3 * f
+        const sf = S[4 * f]!
+        const y0 = rows[i]! / sf
+        const y1 = rows[i + 1]! / sf
+        y[3 * f] = y0
+        y[3 * f + 1] = y1
+        y[3 * f + 2] = (rows[i + 2]! - S[4 * f + 1]! * y0 - S[4 * f + 2]! * y1) / S[4 * f + 3]!
+      }
+      const u = solveK!(y)
+      for (let f = 0; f < nf; f++) {
+        const i = o + 3 * f
+        const sf = S[4 * f]!
+        const x2 = u[3 * f + 2]! / S[4 * f + 3]!
+        rows[i] = (u[3 * f]! - S[4 * f + 1]! * x2) / sf
+        rows[i + 1] = (u[3 * f + 1]! - S[4 * f + 2]! * x2) / sf
+        rows[i + 2] = x2
+      }
+    }
+  }
 
   // Load vectors in standard coordinates: b = S' M r.
   let loads = options.loads
@@ -758,8 +802,24 @@ function solveLowest(form: StandardForm, M: Float64Array, options: EigenOptions)
   }
 
   const maxDim = n
-  const Q = new Float64Array(maxDim * n) // Lanczos vectors as rows
-  const H = new Float64Array(maxDim * maxDim) // projected A^-1, symmetric
+  // Lanczos vectors as rows and the projected A^-1 (symmetric, row stride hs); grown on demand so a
+  // tall building does not allocate n² for a few dozen modes.
+  let cap = Math.min(maxDim, Math.max(4 * p, 96))
+  let Q = new Float64Array(cap * n)
+  let hs = cap
+  let H = new Float64Array(cap * cap)
+  const ensure = (rows: number): void => {
+    if (rows <= cap) return
+    const next = Math.min(maxDim, Math.max(rows, 2 * cap))
+    const Q2 = new Float64Array(next * n)
+    Q2.set(Q.subarray(0, cap * n))
+    const H2 = new Float64Array(next * next)
+    for (let i = 0; i < cap; i++) H2.set(H.subarray(i * hs, i * hs + cap), i * next)
+    Q = Q2
+    H = H2
+    hs = next
+    cap = next
+  }
   let dim = 0
   let seed = 2024
   const randomRow = (row: Float64Array): void => {
@@ -795,6 +855,7 @@ function solveLowest(form: StandardForm, M: Float64Array, options: EigenOptions)
       randomRow(v)
       nrm = orthogonalize(v, null)
     }
+    ensure(dim + 1)
     for (let i = 0; i < n; i++) Q[dim * n + i] = v[i]! / nrm
     dim++
   }
@@ -806,12 +867,12 @@ function solveLowest(form: StandardForm, M: Float64Array, options: EigenOptions)
   let ritzVectors: Float64Array
   let ritzDim: number
   const W = new Float64Array(p * n)
-  const coef = new Float64Array(maxDim)
+  const coef = new Float64Array(maxDim + 1)
   for (;;) {
     // W = A^-1 Q_block
     const bsize = blockEnd - blockStart
     W.set(Q.subarray(blockStart * n, blockEnd * n))
-    choleskySolveRows(L, n, W, bsize)
+    applyInverse(W, bsize)
     for (let b = 0; b < bsize; b++) {
       const col = blockStart + b
       const w = W.subarray(b * n, (b + 1) * n)
@@ -819,14 +880,15 @@ function solveLowest(form: StandardForm, M: Float64Array, options: EigenOptions)
       const ref = Math.sqrt(dot(w, 0, w, 0, n))
       const nrm = orthogonalize(w, coef)
       for (let q = 0; q < dim; q++) {
-        H[q * maxDim + col] = coef[q]!
-        H[col * maxDim + q] = coef[q]!
+        H[q * hs + col] = coef[q]!
+        H[col * hs + q] = coef[q]!
       }
       if (dim >= maxDim) continue
+      ensure(dim + 1)
       if (nrm > 1e-10 * ref) {
         for (let i = 0; i < n; i++) Q[dim * n + i] = w[i]! / nrm
-        H[dim * maxDim + col] = nrm
-        H[col * maxDim + dim] = nrm
+        H[dim * hs + col] = nrm
+        H[col * hs + dim] = nrm
       } else {
         // invariant subspace: continue with a fresh direction (coupling 0)
         const r = new Float64Array(n)
@@ -839,7 +901,7 @@ function solveLowest(form: StandardForm, M: Float64Array, options: EigenOptions)
     // Rayleigh-Ritz on the columns whose images are complete (0..blockEnd).
     const m = blockEnd
     const Hm = new Float64Array(m * m)
-    for (let i = 0; i < m; i++) for (let j = 0; j < m; j++) Hm[i * m + j] = H[i * maxDim + j]!
+    for (let i = 0; i < m; i++) for (let j = 0; j < m; j++) Hm[i * m + j] = H[i * hs + j]!
     const eig = symmetricEigen(Hm, m)
     // descending theta = ascending lambda
     const order = Array.from({ length: m }, (_, i) => m - 1 - i)
@@ -855,7 +917,7 @@ function solveLowest(form: StandardForm, M: Float64Array, options: EigenOptions)
       let res2 = 0
       for (let q = m; q < dim; q++) {
         let s = 0
-        for (let j = blockStart; j < m; j++) s += H[q * maxDim + j]! * vecs[k * m + j]!
+        for (let j = blockStart; j < m; j++) s += H[q * hs + j]! * vecs[k * m + j]!
         res2 += s * s
       }
       if (!(Math.sqrt(res2) <= 1e-10 / lam[k]!) && dim < maxDim) break
@@ -904,7 +966,7 @@ function solveLowest(form: StandardForm, M: Float64Array, options: EigenOptions)
     const hi = ritzValues[count]!
     sigma = lo + 0.5 * (hi - lo)
     for (let attempt = 0; attempt < 4 && sCount === null; attempt++) {
-      sCount = sturmCount(form.A, n, sigma)
+      sCount = sturmCount(form.A, n, sigma, L ?? undefined)
       if (sCount === null) sigma = lo + (0.3 + 0.15 * attempt) * (hi - lo)
     }
     if (sCount !== count) return null

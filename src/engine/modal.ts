@@ -6,6 +6,7 @@
 import { solveEigen } from './eigen'
 import type { EigenOptions } from './eigen'
 import type { ModalResult, ModeCharacter, Structure } from './results'
+import type { StiffnessSolver } from './solve'
 
 /** Options of `solveModes`. */
 export interface ModalOptions {
@@ -20,6 +21,11 @@ export interface ModalOptions {
   readonly massTarget?: number
   /** Lowest-mode method: also find every mode with a period of at least this many seconds. */
   readonly periodCutoff?: number
+  /**
+   * An existing factorization of K (analyzeProject's stiffness solver). The lowest-mode method then
+   * reuses it for the shift-invert products instead of factoring again; results are the same.
+   */
+  readonly stiffnessSolver?: StiffnessSolver
 }
 
 /** Up to this many DOFs (3 per floor) `solveModes` finds all modes by default. */
@@ -78,6 +84,9 @@ export function solveModes(structure: Structure, options: ModalOptions = {}): Mo
           massTarget: options.massTarget ?? 0.9,
           loads: [r.x, r.y, r.rz],
           ...(options.periodCutoff !== undefined ? { periodCutoff: options.periodCutoff } : {}),
+          ...(options.stiffnessSolver
+            ? { solveStiffness: (f: Float64Array) => options.stiffnessSolver!.solve(f) }
+            : {}),
         }
   const sol = solveEigen(
     structure.stiffness,

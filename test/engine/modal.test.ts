@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest'
 import { buildStructure } from '@/engine/assemble'
 import { solveModes } from '@/engine/modal'
 import type { Structure } from '@/engine/results'
+import { createStiffnessSolver } from '@/engine/solve'
 import { expectRelClose } from '../helpers/approx'
 import { generateBuilding, structureFromParts } from '../helpers/generateBuilding'
 
@@ -154,8 +155,14 @@ describe('solveModes', () => {
       // ASCE/SEI 7-16 12.9.1.1 exception and EN 1998-1 4.3.3.3.1: at least 90% of the mass
       expect(modes.cumulativeMassRatio[k][modes.count - 1]!).toBeGreaterThanOrEqual(0.9)
     }
+    // reusing the stiffness solver's factorization gives the same modes
+    const solver = createStiffnessSolver(s)
+    if (!solver.ok) throw new Error('mechanism')
+    const reused = solveModes(s, { stiffnessSolver: solver.solver })
+    expect(reused.count).toBe(modes.count)
     const all = solveModes(s, { method: 'all' })
     for (let i = 0; i < modes.count; i++) {
+      expectRelClose(reused.angularFrequencies[i]!, all.angularFrequencies[i]!, 1e-9)
       expectRelClose(modes.angularFrequencies[i]!, all.angularFrequencies[i]!, 1e-9)
       expect(modes.effectiveMassRatio.x[i]!).toBeCloseTo(all.effectiveMassRatio.x[i]!, 8)
       expect(modes.character[i]).toBe(all.character[i])
