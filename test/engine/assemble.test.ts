@@ -1,3 +1,4 @@
+import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
 import { buildStructure, scatterElement } from '@/engine/assemble'
 import { isExactlySymmetric, translationalMass } from '@/engine/checks'
@@ -99,6 +100,30 @@ describe('buildStructure', () => {
     const xc = s.floors.reduce((a, f) => a + f.mass * f.centreOfMass.x, 0) / s.totalMass
     expectRelClose(s.buildingCentreOfMass.x, xc, 1e-14)
     expect(s.floors.map((f) => f.elevation)).toEqual([4.5, 7.7, 10.9, 13.9].map((z) => expect.closeTo(z, 12)))
+  })
+
+  it('keeps K exactly symmetric and equal to the dense formula on seeded random models', () => {
+    const pt = fc.record({ x: fc.double({ min: -20, max: 40, noNaN: true }), y: fc.double({ min: -20, max: 40, noNaN: true }) })
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 1, max: 5 }),
+        fc.array(fc.tuple(pt, pt, fc.double({ min: 0.15, max: 0.5, noNaN: true })), { maxLength: 3 }),
+        fc.array(fc.tuple(pt, pt, fc.double({ min: 1e7, max: 1e9, noNaN: true })), { maxLength: 3 }),
+        fc.array(fc.tuple(pt, fc.double({ min: 0, max: 3.2, noNaN: true })), { maxLength: 2 }),
+        (floors, walls, frames, columns) => {
+          const b = projectBuilder({ floors }).rectSlab({ x: -20, y: -20, width: 60, depth: 60, areaMass: 600 })
+          for (const [p1, p2, t] of walls) b.wall({ p1, p2, thickness: t })
+          for (const [p1, p2, k] of frames) b.frameLine({ p1, p2, storyStiffness: k })
+          for (const [at, angle] of columns) b.column({ at, angle, Ix: 0.01, Iy: 0.003 })
+          const s = buildStructure(b.build()).structure!
+          expect(isExactlySymmetric(s.stiffness)).toBe(true)
+          // MODELING.md: K = Σ A' k_e A (dense reference)
+          expectArrayRelClose(s.stiffness, denseReference(s), 1e-12)
+          expectRelClose(translationalMass(s.mass).x, s.totalMass, 1e-14)
+        },
+      ),
+      { seed: 20261202, numRuns: 40 },
+    )
   })
 
   it('gives K at the CM = k[[2,0,0],[0,3,-10],[0,-10,350]] for the one-storey eccentric case', () => {

@@ -107,6 +107,19 @@ describe('createStiffnessSolver', () => {
     expectRelClose((u[1]! + u[2]! * D.x) * 1000, 2.63158, 1e-5)
   })
 
+  it('moves every centre of rigidity with the plan origin (MODELING.md: nothing depends on O)', () => {
+    // CR from F_j (MODELING.md §Centres): x_cr = -F[theta,u_y]/F[theta,theta], y_cr = F[theta,u_x]/F[theta,theta]
+    const D = { x: -41, y: 23 }
+    const a = solverOf(mixedModel()).solver.floorFlexibilities()
+    const b = solverOf(mixedModel(D)).solver.floorFlexibilities()
+    for (let j = 0; j < 4; j++) {
+      const o = 9 * j
+      expectRelClose(-b[o + 7]! / b[o + 8]! - D.x, -a[o + 7]! / a[o + 8]!, 1e-9)
+      expectRelClose(b[o + 6]! / b[o + 8]! - D.y, a[o + 6]! / a[o + 8]!, 1e-9)
+      expectRelClose(b[o + 8]!, a[o + 8]!, 1e-9)
+    }
+  })
+
   it('names y when all elements are parallel to x', () => {
     const p = projectBuilder({ floors: 3 })
       .rectSlab({ width: 20, depth: 10, areaMass: 500 })
