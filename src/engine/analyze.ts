@@ -64,7 +64,8 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
   issues.push(...solver.issues)
   lap('factor')
 
-  const modes = solveModes(structure)
+  const modes = solveModes(structure, { stiffnessSolver: solver.solver })
+  if (modes.issues) issues.push(...modes.issues)
   if (!modes.complete) {
     issues.push({
       code: 'eigen-incomplete',
