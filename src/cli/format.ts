@@ -49,9 +49,15 @@ const pct = (ratio: number): string => (Number.isFinite(ratio) ? `${(100 * ratio
 
 const VERDICT_ORDER: Record<Verdict, number> = { fail: 2, pass: 1, 'not-applicable': 0 }
 
+/** The row that decides a story's verdict; among several failures the last (the stricter test). */
 function worst(rows: readonly CheckRow[]): CheckRow | undefined {
   let pick: CheckRow | undefined
-  for (const r of rows) if (!pick || VERDICT_ORDER[r.verdict] > VERDICT_ORDER[pick.verdict]) pick = r
+  for (const r of rows) {
+    const rank = VERDICT_ORDER[r.verdict]
+    if (!pick || rank > VERDICT_ORDER[pick.verdict] || (rank === VERDICT_ORDER.fail && pick.verdict === 'fail')) {
+      pick = r
+    }
+  }
   return pick
 }
 
