@@ -19,12 +19,14 @@ const notice =
       ? `[autosave] The autosaved copy could not be restored (${saved.errors[0] ?? 'invalid'}); started on the demo building.`
       : null
 exposeDebugHandle(store, analysis)
+// `?still` starts the 3D view paused (browser tests and benchmarks on software WebGL).
+const still = new URLSearchParams(window.location.search).has('still')
 
 const root = document.getElementById('root')
 if (root) {
   createRoot(root).render(
     <StrictMode>
-      <App store={store} analysis={analysis} startupNotice={notice} />
+      <App store={store} analysis={analysis} startupNotice={notice} {...(still ? { viewerInitial: { playing: false } } : {})} />
     </StrictMode>,
   )
 }

@@ -25,6 +25,7 @@ import type { Issue } from '@/engine'
 import { demoProject } from '@/model'
 import type { BaseRef, FloorId, Project, UnitSystem } from '@/model'
 import { ViewerPane } from '@/viewer'
+import type { ViewerPaneProps } from '@/viewer'
 import { ACTIONS, actionForKey } from './actions'
 import type { Action, ActionContext } from './actions'
 import type { AnalysisClient } from './analysisClient'
@@ -52,6 +53,8 @@ export interface AppProps {
   readonly analysis: AnalysisClient
   /** A message from start-up (autosave restored or refused). */
   readonly startupNotice?: string | null
+  /** Initial 3D viewer settings (e.g. animation paused for tests and benchmarks). */
+  readonly viewerInitial?: ViewerPaneProps['initial']
 }
 
 interface Banner {
@@ -101,7 +104,7 @@ function previewOf(draft: Draft | null, wallThickness: number): PlanPreview[] {
   }
 }
 
-export function App({ store, analysis, startupNotice = null }: AppProps) {
+export function App({ store, analysis, startupNotice = null, viewerInitial }: AppProps) {
   const doc = useEditor(store, (s) => s.doc)
   const revision = useEditor(store, (s) => s.revision)
   const floorId = useEditor(store, (s) => s.currentFloor)
@@ -453,7 +456,12 @@ export function App({ store, analysis, startupNotice = null }: AppProps) {
             </ErrorBoundary>
             <div className="viewer-slot">
               <ErrorBoundary name="3D view">
-                <ViewerPane project={doc} result={state.result} isStale={state.isStale || state.error !== null} />
+                <ViewerPane
+                  project={doc}
+                  result={state.result}
+                  isStale={state.isStale || state.error !== null}
+                  {...(viewerInitial ? { initial: viewerInitial } : {})}
+                />
               </ErrorBoundary>
             </div>
           </div>

@@ -11,7 +11,8 @@ export interface PlanPoint {
 
 /** Open the app with empty storage (or keep it) and wait for the first current analysis. */
 export async function openApp(page: Page, url: string): Promise<void> {
-  await page.goto(url)
+  // `still`: the 3D view starts paused, so software rendering does not compete with the test.
+  await page.goto(`${url}?still`)
   await page.waitForSelector('[data-testid="plan-canvas"]')
   await waitForCurrentAnalysis(page)
 }

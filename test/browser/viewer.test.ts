@@ -1,0 +1,164 @@
+/**
+ * The 3D view in the built app under software WebGL (SwiftShader): it draws, animates, switches
+ * modes, presents, exports, and says why when WebGL is missing. Pixels are read from Playwright
+ * screenshots of the canvas element and decoded with test/viewer/pngDecode.ts.
+ */
+import { readFileSync } from 'node:fs'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import type { Page } from 'playwright-core'
+import { CAUTION } from '@/model'
+import { contentShare, decodePng, differenceShare, hasPngSignature } from '../viewer/pngDecode'
+import type { DecodedPng } from '../viewer/pngDecode'
+import { startBrowserSession } from './harness'
+import type { BrowserSession } from './harness'
+
+let session: BrowserSession
+
+beforeAll(async () => {
+  session = await startBrowserSession()
+})
+afterAll(async () => {
+  await session?.close()
+})
+
+const CANVAS = '[data-testid=viewer-canvas] canvas'
+
+async function openApp(): Promise<{ page: Page; errors: string[]; close: () => Promise<void> }> {
+  const { page, context, errors } = await session.newPage()
+  await page.goto(session.url)
+  await page.waitForSelector('[data-testid=mode-row-1]', { timeout: 60000 })
+  await page.waitForSelector(CANVAS)
+  await page.waitForTimeout(500)
+  return { page, errors, close: () => context.close() }
+}
+
+async function shot(page: Page): Promise<DecodedPng> {
+  return decodePng(new Uint8Array(await page.locator(CANVAS).screenshot()))
+}
+
+describe('3D view', () => {
+  it('renders the building: the canvas holds non-blank pixels', async () => {
+    const { page, errors, close } = await openApp()
+    const img = await shot(page)
+    await session.screenshot(page, 'viewer-app')
+    // The building covers a good part of the view; a blank canvas would give ~0.
+    expect(contentShare(img)).toBeGreaterThan(0.05)
+    expect(errors.filter((e) => e.includes('[viewer]'))).toEqual([])
+    await close()
+  })
+
+  it('animates while playing (two frames differ) and holds still when paused', async () => {
+    const { page, close } = await openApp()
+    const a = await shot(page)
+    await page.waitForTimeout(350)
+    const b = await shot(page)
+    expect(differenceShare(a, b)).toBeGreaterThan(0.002)
+    await page.click('[data-testid=viewer-play]')
+    await expect.poll(() => page.textContent('[data-testid=viewer-play]')).toBe('Play')
+    await page.waitForTimeout(200)
+    const c = await shot(page)
+    await page.waitForTimeout(350)
+    const d = await shot(page)
+    expect(differenceShare(c, d)).toBeLessThan(0.0005)
+    await close()
+  })
+
+  it('shows another shape when another mode is picked', async () => {
+    const { page, close } = await openApp()
+    await page.click('[data-testid=viewer-peak]')
+    await page.waitForTimeout(300)
+    const first = await shot(page)
+    await page.click('[data-testid=mode-row-3]')
+    await expect.poll(() => page.getAttribute('[data-testid=viewer-pane]', 'data-mode')).toBe('3')
+    expect(await page.getAttribute('[data-testid=mode-row-3]', 'aria-selected')).toBe('true')
+    await page.waitForTimeout(300)
+    const third = await shot(page)
+    expect(differenceShare(first, third)).toBeGreaterThan(0.003)
+    await session.screenshot(page, 'viewer-mode-3')
+    await close()
+  })
+
+  it('opens presentation mode full window with title, meaning and caution, and closes it', async () => {
+    const { page, close } = await openApp()
+    const small = await page.locator('[data-testid=viewer-pane]').boundingBox()
+    await page.click('[data-testid=viewer-present]')
+    await expect.poll(() => page.getAttribute('[data-testid=viewer-pane]', 'data-presenting')).toBe('true')
+    const big = await page.locator('[data-testid=viewer-pane]').boundingBox()
+    expect(big?.width).toBeCloseTo(1440, 0)
+    expect(big?.height).toBeCloseTo(900, 0)
+    expect(await page.textContent('[data-testid=presentation-title]')).toMatch(/^Mode 1 · T = \d/)
+    expect(await page.textContent('[data-testid=presentation-meaning]')).toMatch(
+      /^Mode 1: (mostly X|mostly Y|mostly torsion|coupled) — /,
+    )
+    expect(await page.textContent('[data-testid=viewer-caution]')).toBe(CAUTION)
+    await page.waitForTimeout(400)
+    await session.screenshot(page, 'viewer-presentation')
+    await page.click('[data-testid=presentation-side]')
+    await page.waitForTimeout(400)
+    await session.screenshot(page, 'viewer-side-by-side')
+    await page.keyboard.press('Escape')
+    await expect.poll(() => page.getAttribute('[data-testid=viewer-pane]', 'data-presenting')).toBe('false')
+    const after = await page.locator('[data-testid=viewer-pane]').boundingBox()
+    expect(after?.width).toBeCloseTo(small?.width ?? 0, 0)
+    await page.click('[data-testid=viewer-present]')
+    await page.click('[data-testid=presentation-close]')
+    await expect.poll(() => page.getAttribute('[data-testid=viewer-pane]', 'data-presenting')).toBe('false')
+    await close()
+  })
+
+  it('exports a PNG named after project and mode with real content', async () => {
+    const { page, close } = await openApp()
+    await page.click('[data-testid=mode-row-2]')
+    const [download] = await Promise.all([
+      page.waitForEvent('download', { timeout: 20000 }),
+      page.click('[data-testid=viewer-export-png]'),
+    ])
+    expect(download.suggestedFilename()).toBe('corner-block-quarry-street_mode-2.png')
+    const path = await download.path()
+    const bytes = new Uint8Array(readFileSync(path))
+    // PNG specification §5.2 signature, then IHDR with the canvas's pixel size.
+    expect(hasPngSignature(bytes)).toBe(true)
+    const img = decodePng(bytes)
+    const size = await page.evaluate((sel) => {
+      const c = document.querySelector(sel) as HTMLCanvasElement
+      return { w: c.width, h: c.height }
+    }, CANVAS)
+    expect(img.width).toBe(size.w)
+    expect(img.height).toBe(size.h)
+    expect(contentShare(img)).toBeGreaterThan(0.05)
+    await close()
+  })
+
+  it('records a short WebM named after project and mode', async () => {
+    const { page, close } = await openApp()
+    const [download] = await Promise.all([
+      page.waitForEvent('download', { timeout: 30000 }),
+      page.click('[data-testid=viewer-export-webm]'),
+    ])
+    expect(download.suggestedFilename()).toBe('corner-block-quarry-street_mode-1.webm')
+    const bytes = new Uint8Array(readFileSync(await download.path()))
+    // WebM is Matroska/EBML: the file starts with the EBML magic 1A 45 DF A3 (RFC 8794 §8.1).
+    expect(Array.from(bytes.subarray(0, 4))).toEqual([0x1a, 0x45, 0xdf, 0xa3])
+    expect(bytes.length).toBeGreaterThan(2000)
+    await close()
+  })
+
+  it('says why when WebGL is unavailable and keeps the rest of the app working', async () => {
+    const { page, context, errors } = await session.newPage()
+    await page.addInitScript(() => {
+      const original = HTMLCanvasElement.prototype.getContext
+      // Simulate a browser without WebGL: every WebGL context request fails.
+      HTMLCanvasElement.prototype.getContext = function (this: HTMLCanvasElement, type: string, ...rest: unknown[]) {
+        if (/webgl/i.test(type)) return null
+        return (original as (...a: unknown[]) => unknown).call(this, type, ...rest)
+      } as typeof original
+    })
+    await page.goto(session.url)
+    await page.waitForSelector('[data-testid=viewer-unavailable]', { timeout: 60000 })
+    expect(await page.textContent('[data-testid=viewer-unavailable]')).toContain('could not create a WebGL context')
+    await page.waitForSelector('[data-testid=mode-row-1]', { timeout: 60000 })
+    expect(await page.locator(CANVAS).count()).toBe(0)
+    expect(errors.filter((e) => /pageerror|Uncaught/i.test(e))).toEqual([])
+    await context.close()
+  })
+})
