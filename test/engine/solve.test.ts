@@ -1,3 +1,4 @@
+import fc from 'fast-check'
 import { Matrix, inverse } from 'ml-matrix'
 import { describe, expect, it } from 'vitest'
 import { buildStructure } from '@/engine/assemble'
@@ -216,6 +217,35 @@ describe('createStiffnessSolver', () => {
     expect(r.issues[0]!.message).toMatch(/almost no resistance to rotation about \(12\.0, 8\.0\)/)
     const ok = createStiffnessSolver(structureOf(mixedModel()))
     expect(ok.ok && ok.issues.length).toBe(0)
+  })
+
+  it('never throws or prints NaN on seeded random, mostly unstable models', () => {
+    const pt = fc.record({ x: fc.double({ min: -10, max: 30, noNaN: true }), y: fc.double({ min: -10, max: 30, noNaN: true }) })
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 1, max: 4 }),
+        fc.array(fc.tuple(pt, pt, fc.integer({ min: 0, max: 3 }), fc.integer({ min: 1, max: 4 })), { maxLength: 3 }),
+        (floors, frames) => {
+          const b = projectBuilder({ floors }).rectSlab({ x: -10, y: -10, width: 40, depth: 40, areaMass: 500 })
+          for (const [p1, p2, base, top] of frames) {
+            b.frameLine({ p1, p2, base: base === 0 ? 'ground' : `L${base}`, top: `L${Math.min(top, floors)}` })
+          }
+          const s = structureOf(b.build())
+          const r = createStiffnessSolver(s)
+          for (const issue of r.issues) {
+            expect(issue.message).not.toMatch(/NaN|undefined|Infinity/)
+            expect(issue.refs.length).toBeGreaterThan(0)
+          }
+          if (r.ok) {
+            const u = r.solver.solve(new Float64Array(s.dofCount).fill(1e5))
+            expect(u.every(Number.isFinite)).toBe(true)
+          } else {
+            expect(r.issues.some((i) => i.code === 'mechanism' && typeof i.floor === 'string')).toBe(true)
+          }
+        },
+      ),
+      { seed: 7, numRuns: 60 },
+    )
   })
 
   it('reports a floor with nothing at all and never returns NaN', () => {
