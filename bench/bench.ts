@@ -44,7 +44,7 @@ function runOnce(project: Project): { ms: number; result: AnalysisResult | null;
     }
     const s = buildStructure(project).structure
     lap('assemble')
-    if (!s) throw new Error('[bench] model did not assemble')
+    if (!s) throw new Error('[bench] model did not assemble', { cause: error })
     const solver = createStiffnessSolver(s)
     lap('factor')
     solveModes(s)
