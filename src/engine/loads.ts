@@ -113,7 +113,13 @@ export function endPointGroups(
   return { low, high }
 }
 
-/** Largest value, mean of the two end means, their ratio (∞ if the mean is 0, 1 if all are 0). */
+/**
+ * Largest max/avg ratio reported. A story whose end average vanishes or reverses (it mostly twists)
+ * gets this value instead of an unbounded one, so results stay finite and serializable.
+ */
+export const TORSION_RATIO_CAP = 1000
+
+/** Largest value, mean of the two end means, their ratio (capped; 1 if all values are 0). */
 function maxAvg(
   values: Float64Array,
   ends: { low: number[]; high: number[] },
@@ -128,8 +134,8 @@ function maxAvg(
   const mean = (idx: number[]): number => idx.reduce((s, k) => s + values[k]!, 0) / idx.length
   const avg = (mean(ends.low) + mean(ends.high)) / 2
   if (scale === 0) return [0, 0, 1]
-  // A vanishing or reversed average means the story mostly twists: report an unbounded ratio.
-  const ratio = avg > 1e-12 * scale ? max / avg : Number.POSITIVE_INFINITY
+  // A vanishing or reversed average means the story mostly twists: report the cap.
+  const ratio = avg > 0 ? Math.min(TORSION_RATIO_CAP, max / avg) : TORSION_RATIO_CAP
   return [max, avg, ratio]
 }
 

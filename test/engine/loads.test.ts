@@ -312,3 +312,26 @@ describe('runStaticTorsion on generated buildings', () => {
     )
   })
 })
+
+describe('runStaticTorsion on a story that mostly twists', () => {
+  it('reports a finite large ratio and Ax = 3 when the story mostly twists', () => {
+    // one y-wall through the CM line plus a far x-pair: under Y+e the plan turns about a point
+    // inside the plan, so the ends move in opposite directions (hand reasoning: ratio ~ 200)
+    const s = buildTestStructure(
+      [{ mass: 1e5, L: 20, B: 10, height: 3 }],
+      [
+        shearElement({ x: 10, y: 0 }, { x: 0, y: 1 }, [1e9]),
+        shearElement({ x: 0, y: 0 }, { x: 1, y: 0 }, [1e6]),
+        shearElement({ x: 0, y: 10 }, { x: 1, y: 0 }, [1e6]),
+      ],
+    )
+    const set = resolveCriterionSet(settings()).set
+    const r = runStaticTorsion(s, denseSolver(s), denseModes(s), settings(), set)
+    const row = caseOf(r, 'Y+e').stories[0]!
+    expect(Number.isFinite(row.driftRatio)).toBe(true)
+    expect(row.driftRatio).toBeGreaterThan(1.4)
+    expect(row.amplification!).toBeCloseTo(3, 12) // ASCE/SEI 7-16 12.8.4.3 cap
+    const rows = r.criterion.rows.filter((w) => w.caseId === 'Y+e' && w.comparison)
+    expect(rows.every((w) => w.verdict === 'fail')).toBe(true)
+  })
+})

@@ -205,7 +205,6 @@ export interface TorsionCheckInput {
   readonly row: StoryTorsionRow
 }
 
-const isRatio = (v: number): boolean => Number.isFinite(v) || v === Number.POSITIVE_INFINITY
 
 /**
  * Check rows of the ratio and amplification rules for every story and static case:
@@ -237,7 +236,7 @@ export function torsionCheckRows(
       ? row.displacementMax === 0 && row.displacementAvg === 0
       : row.driftMax === 0 && row.driftAvg === 0
     const verdictFor = (limit: number): Verdict =>
-      !empty && isRatio(ratio) ? (ratio <= limit ? 'pass' : 'fail') : 'not-applicable'
+      !empty && Number.isFinite(ratio) ? (ratio <= limit ? 'pass' : 'fail') : 'not-applicable'
     if (set.irregularRatio !== undefined) {
       rows.push({
         floorId: row.floorId,
