@@ -108,7 +108,7 @@ export function PlanTrace(props: Props) {
   const cr = marks.cr[floorIndex]
   return (
     <figure className="gyre-trace" data-testid="viewer-trace">
-      <svg width={SIZE} height={SIZE} viewBox={`0 0 ${SIZE} ${SIZE}`} role="img" aria-label={`Plan paths of ${floor.name}`}>
+      <svg viewBox={`0 0 ${SIZE} ${SIZE}`} role="img" aria-label={`Plan paths of ${floor.name}`}>
         {drawing.outlines.map((o, i) => (
           <polygon key={`o${i}`} points={pts(o, map)} className="gyre-trace-rest" />
         ))}

@@ -6,6 +6,7 @@
 import { useEffect, useMemo, useRef } from 'react'
 import type { RefObject } from 'react'
 import { Canvas, useFrame, useThree } from '@react-three/fiber'
+import type { RootState } from '@react-three/fiber'
 import * as THREE from 'three'
 import { OrbitControls } from 'three/examples/jsm/controls/OrbitControls.js'
 import { useStore } from 'zustand'
@@ -32,7 +33,8 @@ interface Props {
   /** Per-frame hook for DOM overlays (the plan trace), run after the clock advances. */
   readonly onFrame: RefObject<(() => void) | null>
   readonly transformsA: RefObject<RigidTransform[]>
-  readonly onReady?: () => void
+  /** Receives the r3f root state once created (exports drive frames with `advance`). */
+  readonly rootState?: RefObject<RootState | null>
 }
 
 function buildShared(layout: BuildingLayout): SharedResources {
@@ -106,16 +108,16 @@ export function sideOffset(layout: BuildingLayout): number {
 }
 
 export function ViewerCanvas(props: Props) {
-  const { layout, store, onReady } = props
+  const { layout, store, rootState } = props
   return (
     <Canvas
       frameloop="demand"
       dpr={[1, 2]}
       gl={{ antialias: true, preserveDrawingBuffer: false }}
       camera={{ fov: 35, near: 0.5, far: 20000, position: [60, -60, 40] }}
-      onCreated={({ camera }) => {
-        camera.up.set(0, 0, 1)
-        onReady?.()
+      onCreated={(state) => {
+        state.camera.up.set(0, 0, 1)
+        if (rootState) rootState.current = state
       }}
       data-testid="viewer-canvas"
     >
@@ -181,7 +183,9 @@ function ClockDriver(props: {
     const s = store.getState()
     // After an idle spell the first delta is the whole pause: clamp it so motion resumes smoothly.
     const dt = Math.min(Math.max(delta, 0), 0.1)
-    if (s.playing || s.recording) {
+    if (clock.held) {
+      // Export drives the clock frame by frame.
+    } else if (s.playing || s.recording) {
       clock.phase = (clock.phase + dt * 2 * Math.PI * BASE_CYCLES_PER_SECOND * s.speed) % (2 * Math.PI)
       clock.time += dt * s.speed
       state.invalidate()
@@ -244,6 +248,9 @@ function CameraRig(props: { layout: BuildingLayout; store: ViewerStore; sideBySi
   const invalidate = useThree((s) => s.invalidate)
   const size = useThree((s) => s.size)
   const controlsRef = useRef<OrbitControls | null>(null)
+  const applyRef = useRef<((preset: CameraPreset) => void) | null>(null)
+  // Until the user orbits, a resize re-fits the current preset (the first size is often provisional).
+  const touched = useRef(false)
   const fit = useRef({ layout, sideBySide, aspect: size.width / Math.max(1, size.height) })
   fit.current = { layout, sideBySide, aspect: size.width / Math.max(1, size.height) }
 
@@ -253,7 +260,11 @@ function CameraRig(props: { layout: BuildingLayout; store: ViewerStore; sideBySi
     controls.enableDamping = false
     controlsRef.current = controls
     const onChange = () => invalidate()
+    const onStart = () => {
+      touched.current = true
+    }
     controls.addEventListener('change', onChange)
+    controls.addEventListener('start', onStart)
     const apply = (preset: CameraPreset) => {
       const f = fit.current
       const box = { ...f.layout.box }
@@ -265,6 +276,7 @@ function CameraRig(props: { layout: BuildingLayout; store: ViewerStore; sideBySi
       controls.update()
       invalidate()
     }
+    applyRef.current = apply
     apply(store.getState().cameraRequest.preset)
     const unsubscribe = store.subscribe((s, prev) => {
       if (s.cameraRequest !== prev.cameraRequest) apply(s.cameraRequest.preset)
@@ -272,9 +284,14 @@ function CameraRig(props: { layout: BuildingLayout; store: ViewerStore; sideBySi
     return () => {
       unsubscribe()
       controls.removeEventListener('change', onChange)
+      controls.removeEventListener('start', onStart)
       controls.dispose()
       controlsRef.current = null
+      applyRef.current = null
     }
   }, [camera, gl, invalidate, store])
+  useEffect(() => {
+    if (!touched.current) applyRef.current?.(store.getState().cameraRequest.preset)
+  }, [size.width, size.height, store])
   return null
 }

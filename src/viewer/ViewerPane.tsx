@@ -1,4 +1,6 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react'
+import { advance } from '@react-three/fiber'
+import type { RootState } from '@react-three/fiber'
 import { useStore } from 'zustand'
 import type { AnalysisResult } from '@/engine'
 import { CAUTION, CAUTION_SHORT } from '@/model'
@@ -7,7 +9,14 @@ import { layoutBuilding } from './buildingLayout'
 import type { FloorMarks } from './BuildingInstance'
 import { legendTicks, rampGradient } from './colourScale'
 import type { ColourBy } from './colourScale'
-import { drawCaptioned, downloadBlob, exportFileName, pickWebmType } from './exportMedia'
+import {
+  canEncodeVp8,
+  drawCaptioned,
+  downloadBlob,
+  encodeWebm,
+  exportFileName,
+  pickWebmType,
+} from './exportMedia'
 import type { RigidTransform } from './modeAnimation'
 import { characterWords } from './modeMeaning'
 import { historyMotion, modeMotion, modeRows, resultFits, wallSegments } from './motionSource'
@@ -48,7 +57,8 @@ const pct = (v: number) => `${(v * 100).toFixed(1)}`
 export function ViewerPane(props: ViewerPaneProps) {
   const { project, result, isStale, initial } = props
   const [store] = useState<ViewerStore>(() => createViewerStore(initial))
-  const [clock] = useState<AnimationClock>(() => ({ phase: Math.PI / 2, time: 0 }))
+  const [clock] = useState<AnimationClock>(() => ({ phase: Math.PI / 2, time: 0, held: false }))
+  const rootState = useRef<RootState | null>(null)
   const capture = useRef<FrameCapture | null>(null)
   const onFrame = useRef<(() => void) | null>(null)
   const transformsA = useRef<RigidTransform[]>([])
@@ -141,40 +151,85 @@ export function ViewerPane(props: ViewerPaneProps) {
     setViewer(store, { message: 'Preparing PNG…' })
   }
 
-  const exportWebm = () => {
-    const type = pickWebmType()
+  const exportWebm = async () => {
     const glCanvas = rootRef.current?.querySelector('canvas')
-    if (!type || !glCanvas) {
-      setViewer(store, { message: '[viewer] This browser cannot record WebM video.' })
+    const root = rootState.current
+    if (!glCanvas || !root) {
+      setViewer(store, { message: '[viewer] Nothing to record: the 3D view is not running.' })
       return
     }
     const name = exportName('webm')
     const cap = caption()
+    // VP8 wants even frame sizes.
+    const w = glCanvas.width - (glCanvas.width % 2)
+    const h = glCanvas.height - (glCanvas.height % 2)
     const out = document.createElement('canvas')
-    out.width = glCanvas.width
-    out.height = glCanvas.height
+    out.width = w
+    out.height = h
     const ctx = out.getContext('2d')
     if (!ctx) return
+    const speed = store.getState().speed
+    const saved = { phase: clock.phase, time: clock.time }
+    setViewer(store, { recording: true, message: `Recording ${name}…` })
+    capture.current = (gl) => drawCaptioned(ctx, gl, w, h, cap)
+    try {
+      if (await canEncodeVp8(w, h)) {
+        const fps = 30
+        const history = motionA?.kind === 'history' ? motionA.history : null
+        // Modes: whole cycles (at most two, at most 8 s) so the file loops without a jump.
+        const cycles = Math.max(1, Math.min(2, Math.floor(8 * BASE_CYCLES_PER_SECOND * speed)))
+        const seconds = history
+          ? Math.min(8, (history.dt * history.stepCount) / speed)
+          : cycles / (BASE_CYCLES_PER_SECOND * speed)
+        const frames = Math.max(2, Math.round(seconds * fps))
+        clock.held = true
+        const blob = await encodeWebm(out, frames, fps, (k) => {
+          clock.phase = (2 * Math.PI * cycles * k) / frames
+          clock.time = (k / fps) * speed
+          advance(performance.now(), true, root)
+        })
+        downloadBlob(blob, name)
+        setViewer(store, { message: `Saved ${name}` })
+      } else {
+        await recordRealTime(out, name, speed)
+      }
+    } catch (e) {
+      setViewer(store, { message: `[viewer] WebM export failed: ${e instanceof Error ? e.message : String(e)}` })
+    } finally {
+      clock.held = false
+      clock.phase = saved.phase
+      clock.time = saved.time
+      capture.current = null
+      setViewer(store, { recording: false })
+    }
+  }
+
+  /** Fallback without WebCodecs: MediaRecorder on the composited canvas in real time. */
+  const recordRealTime = async (out: HTMLCanvasElement, name: string, speed: number) => {
+    const type = pickWebmType()
+    if (!type) throw new Error('this browser can neither encode nor record WebM video')
     const stream = out.captureStream(30)
     const recorder = new MediaRecorder(stream, { mimeType: type, videoBitsPerSecond: 4_000_000 })
     const chunks: Blob[] = []
     recorder.ondataavailable = (e) => {
       if (e.data.size > 0) chunks.push(e.data)
     }
-    recorder.onstop = () => {
-      capture.current = null
-      stream.getTracks().forEach((t) => t.stop())
-      downloadBlob(new Blob(chunks, { type: 'video/webm' }), name)
-      setViewer(store, { recording: false, message: `Saved ${name}` })
-    }
-    capture.current = (gl) => drawCaptioned(ctx, gl, out.width, out.height, cap)
-    // Two whole cycles loop seamlessly; start at rest so the loop joins without a jump.
-    const cycles = 2
-    const seconds = Math.min(8, cycles / (BASE_CYCLES_PER_SECOND * store.getState().speed))
+    const stopped = new Promise<void>((done) => (recorder.onstop = () => done()))
+    const seconds = Math.min(8, 2 / (BASE_CYCLES_PER_SECOND * speed))
     clock.phase = 0
-    setViewer(store, { recording: true, message: `Recording ${name}…` })
     recorder.start(250)
-    window.setTimeout(() => recorder.stop(), seconds * 1000)
+    await new Promise((r) => window.setTimeout(r, seconds * 1000))
+    recorder.stop()
+    await stopped
+    stream.getTracks().forEach((t) => t.stop())
+    if (chunks.length === 0) throw new Error('the browser recorded no video frames')
+    downloadBlob(new Blob(chunks, { type: 'video/webm' }), name)
+    setViewer(store, { message: `Saved ${name}` })
+  }
+
+  const peak = () => {
+    clock.phase = Math.PI / 2
+    setViewer(store, { playing: false, message: '' })
   }
 
   const step = () => {
@@ -214,7 +269,15 @@ export function ViewerPane(props: ViewerPaneProps) {
         <p data-testid="presentation-meaning">{presentMeaning}</p>
         {presentMeaningB && <p>{presentMeaningB}</p>}
       </header>
-      <Toolbar store={store} state={state} hasHistory={Boolean(history)} onStep={step} onPng={exportPng} onWebm={exportWebm} />
+      <Toolbar
+        store={store}
+        state={state}
+        hasHistory={Boolean(history)}
+        onStep={step}
+        onPeak={peak}
+        onPng={exportPng}
+        onWebm={() => void exportWebm()}
+      />
       {state.presenting && (
         <PresentationBar store={store} state={state} rows={rows.length} />
       )}
@@ -233,6 +296,7 @@ export function ViewerPane(props: ViewerPaneProps) {
               capture={capture}
               onFrame={onFrame}
               transformsA={transformsA}
+              rootState={rootState}
             />
           </ViewerErrorBoundary>
         )}
@@ -311,10 +375,11 @@ function Toolbar(props: {
   state: ViewerState
   hasHistory: boolean
   onStep: () => void
+  onPeak: () => void
   onPng: () => void
   onWebm: () => void
 }) {
-  const { store, state, hasHistory, onStep, onPng, onWebm } = props
+  const { store, state, hasHistory, onStep, onPeak, onPng, onWebm } = props
   const cam = (preset: CameraPreset, label: string, id: string) => (
     <button type="button" data-testid={`viewer-camera-${id}`} onClick={() => requestCamera(store, preset)}>
       {label}
@@ -333,6 +398,9 @@ function Toolbar(props: {
         </button>
         <button type="button" data-testid="viewer-step" onClick={onStep}>
           Step
+        </button>
+        <button type="button" data-testid="viewer-peak" title="Pause at the largest displacement" onClick={onPeak}>
+          Peak
         </button>
         <label>
           Speed

@@ -80,3 +80,55 @@ export function pickWebmType(): string | null {
 
 /** PNG signature bytes (ISO/IEC 15948 §5.2 / RFC 2083 §3.1). */
 export const PNG_SIGNATURE = [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a] as const
+
+/** Whether WebCodecs can encode VP8 at this size (frame-exact WebM export). */
+export async function canEncodeVp8(width: number, height: number): Promise<boolean> {
+  if (typeof VideoEncoder === 'undefined' || typeof VideoFrame === 'undefined') return false
+  try {
+    const r = await VideoEncoder.isConfigSupported({ codec: 'vp8', width, height, bitrate: 4_000_000 })
+    return Boolean(r.supported)
+  } catch (_e) {
+    return false
+  }
+}
+
+/**
+ * Encode `frameCount` frames to a WebM (VP8) with WebCodecs and webm-muxer. `drawFrame(k)` must
+ * leave frame k drawn on `canvas` (even width and height). Frames are timed exactly at `fps`, so the
+ * file plays smoothly however slowly this machine renders, and a whole number of cycles loops cleanly.
+ */
+export async function encodeWebm(
+  canvas: HTMLCanvasElement,
+  frameCount: number,
+  fps: number,
+  drawFrame: (k: number) => void,
+): Promise<Blob> {
+  const { Muxer, ArrayBufferTarget } = await import('webm-muxer')
+  const target = new ArrayBufferTarget()
+  const muxer = new Muxer({
+    target,
+    video: { codec: 'V_VP8', width: canvas.width, height: canvas.height, frameRate: fps },
+  })
+  let failure: Error | null = null
+  const encoder = new VideoEncoder({
+    output: (chunk, meta) => muxer.addVideoChunk(chunk, meta),
+    error: (e) => {
+      failure = e instanceof Error ? e : new Error(String(e))
+    },
+  })
+  encoder.configure({ codec: 'vp8', width: canvas.width, height: canvas.height, bitrate: 4_000_000, framerate: fps })
+  for (let k = 0; k < frameCount; k++) {
+    if (failure) break
+    drawFrame(k)
+    const frame = new VideoFrame(canvas, { timestamp: Math.round((k * 1e6) / fps), duration: Math.round(1e6 / fps) })
+    encoder.encode(frame, { keyFrame: k % fps === 0 })
+    frame.close()
+    // Keep the encoder queue short so memory stays flat and the page stays responsive.
+    while (encoder.encodeQueueSize > 4) await new Promise((r) => setTimeout(r, 5))
+  }
+  await encoder.flush()
+  encoder.close()
+  if (failure) throw failure
+  muxer.finalize()
+  return new Blob([target.buffer], { type: 'video/webm' })
+}

@@ -84,4 +84,6 @@ export interface AnimationClock {
   phase: number
   /** Time-history playback time, s. */
   time: number
+  /** While true the frame loop does not advance the clock (frame-exact export sets it itself). */
+  held: boolean
 }

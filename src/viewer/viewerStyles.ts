@@ -1,28 +1,32 @@
 /** Styles of the 3D view pane (scoped by the gyre-viewer class; our own look). */
 export const VIEWER_CSS = `
-.gyre-viewer { display: flex; flex-direction: column; gap: 6px; height: 100%; min-height: 520px;
-  font: 13px/1.35 system-ui, sans-serif; color: #1f2630; background: #f4f2ed; box-sizing: border-box; padding: 6px; }
+.gyre-viewer { display: flex; flex-direction: column; gap: 4px; height: 100%; min-height: 0;
+  font: 12px/1.3 system-ui, sans-serif; color: #1f2630; background: #f4f2ed; box-sizing: border-box; padding: 4px; overflow: hidden; }
 .gyre-viewer * { box-sizing: border-box; }
-.gyre-viewer-bar { display: flex; flex-wrap: wrap; gap: 4px 10px; align-items: center; }
-.gyre-viewer-bar fieldset { border: 0; padding: 0; margin: 0; display: flex; gap: 4px; align-items: center; }
-.gyre-viewer button { font: inherit; padding: 2px 8px; border: 1px solid #9aa0a8; border-radius: 3px;
+.gyre-viewer-bar { display: flex; flex-wrap: wrap; gap: 3px 8px; align-items: center; flex: 0 0 auto; }
+.gyre-viewer-bar--main { flex: 1 1 100%; min-width: 0; }
+.gyre-viewer-bar fieldset { border: 0; padding: 0; margin: 0; display: flex; flex-wrap: wrap; gap: 3px; align-items: center; min-width: 0; }
+.gyre-viewer button { font: inherit; padding: 1px 6px; border: 1px solid #9aa0a8; border-radius: 3px;
   background: #fbfaf6; color: #1f2630; cursor: pointer; }
 .gyre-viewer button[aria-pressed="true"] { background: #2b3a55; color: #f7f3e8; border-color: #2b3a55; }
-.gyre-viewer input[type=range] { width: 84px; }
-.gyre-viewer-stage { position: relative; flex: 1 1 auto; min-height: 340px; border: 1px solid #c9c3b6;
+.gyre-viewer input[type=range] { width: 64px; vertical-align: middle; }
+.gyre-viewer select { font: inherit; max-width: 9em; }
+.gyre-viewer-stage { position: relative; flex: 1 1 auto; min-height: 180px; container-type: size; border: 1px solid #c9c3b6;
   background: #ebe8e1; overflow: hidden; }
 .gyre-viewer-stage > div:first-child { position: absolute !important; inset: 0; }
 .gyre-viewer-banner { position: absolute; top: 6px; left: 6px; right: 6px; padding: 3px 8px;
   background: rgba(224, 138, 60, 0.92); color: #1f2630; border-radius: 3px; z-index: 2; }
-.gyre-legend { position: absolute; left: 8px; bottom: 8px; background: rgba(251, 250, 246, 0.9);
-  padding: 4px 8px; border-radius: 3px; z-index: 2; max-width: 260px; }
-.gyre-legend-bar { height: 10px; width: 200px; border-radius: 2px; }
-.gyre-legend-ticks { display: flex; justify-content: space-between; width: 200px; font-size: 11px; }
+.gyre-legend { position: absolute; left: 6px; bottom: 6px; background: rgba(251, 250, 246, 0.9);
+  padding: 3px 6px; border-radius: 3px; z-index: 2; max-width: min(260px, 48cqw); font-size: 11px; }
+.gyre-legend-bar { height: 9px; width: 100%; min-width: 100px; border-radius: 2px; }
+.gyre-legend-ticks { display: flex; justify-content: space-between; gap: 4px; font-size: 10px; }
 .gyre-legend-keys { font-size: 11px; margin-top: 2px; }
 .gyre-legend-keys i { display: inline-block; width: 9px; height: 9px; margin: 0 3px 0 6px; vertical-align: -1px; }
-.gyre-trace { position: absolute; right: 8px; bottom: 8px; margin: 0; background: rgba(251, 250, 246, 0.92);
+.gyre-trace { position: absolute; right: 6px; bottom: 6px; margin: 0; background: rgba(251, 250, 246, 0.92);
   border-radius: 3px; padding: 4px; z-index: 2; font-size: 11px; }
-.gyre-trace figcaption { max-width: 220px; }
+.gyre-trace svg { display: block; width: clamp(80px, 34cqw, 220px); height: auto; }
+.gyre-trace figcaption { max-width: clamp(80px, 34cqw, 220px); font-size: 10px; }
+@container (max-width: 480px) { .gyre-legend-keys, .gyre-trace figcaption { display: none; } }
 .gyre-trace-rest { fill: #ddd8cc; stroke: #6b6558; stroke-width: 1; stroke-dasharray: 3 2; }
 .gyre-trace-hole { fill: #fbfaf6; stroke: #6b6558; stroke-width: 0.8; }
 .gyre-trace-extreme { fill: none; stroke: #a8322a; stroke-width: 1; stroke-dasharray: 5 3; }
@@ -31,16 +35,16 @@ export const VIEWER_CSS = `
 .gyre-trace-cm { fill: #6b3fa0; }
 .gyre-trace-cr { fill: #14806b; }
 .gyre-trace-centre line { stroke: #a8322a; stroke-width: 2; }
-.gyre-modes { max-height: 190px; overflow: auto; border: 1px solid #c9c3b6; background: #fbfaf6; }
+.gyre-modes { flex: 0 0 auto; max-height: 32%; min-height: 64px; overflow: auto; border: 1px solid #c9c3b6; background: #fbfaf6; }
 .gyre-modes table { border-collapse: collapse; width: 100%; font-variant-numeric: tabular-nums; }
-.gyre-modes th, .gyre-modes td { padding: 2px 6px; text-align: right; white-space: nowrap; }
+.gyre-modes th, .gyre-modes td { padding: 1px 5px; text-align: right; white-space: nowrap; }
 .gyre-modes th { position: sticky; top: 0; background: #e4e0d6; font-weight: 600; }
 .gyre-modes td:last-child, .gyre-modes th:last-child { text-align: left; }
 .gyre-modes tbody tr { cursor: pointer; }
 .gyre-modes tbody tr:hover { background: #efe9da; }
 .gyre-modes tbody tr[aria-selected="true"] { background: #2b3a55; color: #f7f3e8; }
 .gyre-viewer-caution { font-size: 11px; color: #5b4a1e; margin: 0; }
-.gyre-viewer-status { font-size: 11px; color: #3d4450; margin: 0; min-height: 1.2em; }
+.gyre-viewer-status { font-size: 11px; color: #3d4450; margin: 0; min-height: 1.3em; white-space: nowrap; overflow: hidden; text-overflow: ellipsis; }
 .gyre-viewer-unavailable { position: absolute; inset: 0; display: flex; align-items: center; padding: 24px;
   background: #f4f2ed; color: #1f2630; }
 .gyre-caption { display: none; }
@@ -54,5 +58,8 @@ export const VIEWER_CSS = `
 .gyre-viewer--presenting .gyre-viewer-stage { border-color: #2b3a55; }
 .gyre-viewer--presenting button { font-size: 16px; padding: 4px 12px; }
 .gyre-viewer--presenting .gyre-viewer-caution { font-size: 15px; color: #f2d58c; }
+.gyre-viewer--presenting .gyre-trace svg { width: clamp(120px, 26cqw, 340px); }
+.gyre-viewer--presenting .gyre-legend { font-size: 14px; }
+.gyre-viewer--presenting .gyre-viewer-stage { min-height: 0; }
 .gyre-viewer--presenting .gyre-viewer-status { color: #b9c3cf; }
 `
