@@ -276,55 +276,72 @@ export function symmetricEigen(
 
 /**
  * Householder reduction of symmetric A to tridiagonal T = Q' A Q (d diagonal, e[j] = T[j, j+1]).
- * Reflector j (acting on entries j+1..n-1) is stored in row j of A with its beta; the trailing block is
- * updated in full rows so every inner loop runs over contiguous memory.
+ * Only the lower triangle is updated (half the work of a full update); the symmetric product
+ * p = A22 v runs along rows, gathering the row part and scattering the column part in one contiguous
+ * sweep. Reflector j (acting on entries j+1..n-1) is stored in the unused upper part of row j, with
+ * its beta.
  */
 function tridiagonalize(A: Float64Array, n: number, d: Float64Array, e: Float64Array, beta: Float64Array): void {
   const p = new Float64Array(n)
+  const v = new Float64Array(n)
   for (let j = 0; j < n - 2; j++) {
     const r = j * n
-    let alpha2 = 0
-    let amax = 0
-    for (let i = j + 1; i < n; i++) amax = Math.max(amax, Math.abs(A[r + i]!))
     d[j] = A[r + j]!
+    let amax = 0
+    for (let i = j + 1; i < n; i++) amax = Math.max(amax, Math.abs(A[i * n + j]!))
     if (amax === 0) {
       e[j] = 0
       beta[j] = 0
       continue
     }
+    let alpha2 = 0
     for (let i = j + 1; i < n; i++) {
-      const v = A[r + i]! / amax
-      alpha2 += v * v
+      const x = A[i * n + j]!
+      v[i] = x
+      const t = x / amax
+      alpha2 += t * t
     }
-    const x0 = A[r + j + 1]!
+    const x0 = v[j + 1]!
     const alpha = -Math.sign(x0 || 1) * amax * Math.sqrt(alpha2)
     // v = x - alpha e1, beta = 1 / (alpha (alpha - x0)); H x = alpha e1.
-    A[r + j + 1] = x0 - alpha
+    v[j + 1] = x0 - alpha
     const b = 1 / (alpha * (alpha - x0))
     beta[j] = b
     e[j] = alpha
-    // p = b * A22 v
+    for (let i = j + 1; i < n; i++) {
+      A[r + i] = v[i]!
+      p[i] = 0
+    }
+    // p = A22 v from the lower triangle
+    for (let i = j + 1; i < n; i++) {
+      const ri = i * n
+      const vi = v[i]!
+      let s = A[ri + i]! * vi
+      for (let c = j + 1; c < i; c++) {
+        const a = A[ri + c]!
+        s += a * v[c]!
+        p[c] = p[c]! + a * vi
+      }
+      p[i] = p[i]! + s
+    }
     let pv = 0
     for (let i = j + 1; i < n; i++) {
-      const ri = i * n
-      let s = 0
-      for (let c = j + 1; c < n; c++) s += A[ri + c]! * A[r + c]!
-      p[i] = b * s
-      pv += p[i]! * A[r + i]!
+      p[i] = b * p[i]!
+      pv += p[i]! * v[i]!
     }
-    // w = p - (b/2)(p'v) v;  A22 -= v w' + w v'
+    // w = p - (b/2)(p'v) v;  A22 -= v w' + w v' (lower triangle)
     const h = 0.5 * b * pv
-    for (let i = j + 1; i < n; i++) p[i] = p[i]! - h * A[r + i]!
+    for (let i = j + 1; i < n; i++) p[i] = p[i]! - h * v[i]!
     for (let i = j + 1; i < n; i++) {
       const ri = i * n
-      const vi = A[r + i]!
+      const vi = v[i]!
       const wi = p[i]!
-      for (let c = j + 1; c < n; c++) A[ri + c]! -= vi * p[c]! + wi * A[r + c]!
+      for (let c = j + 1; c <= i; c++) A[ri + c] = A[ri + c]! - (vi * p[c]! + wi * v[c]!)
     }
   }
   if (n >= 2) {
     d[n - 2] = A[(n - 2) * n + n - 2]!
-    e[n - 2] = A[(n - 2) * n + n - 1]!
+    e[n - 2] = A[(n - 1) * n + n - 2]!
     beta[n - 2] = 0
   }
   if (n >= 1) d[n - 1] = A[n * n - 1]!
