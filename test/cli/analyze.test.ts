@@ -103,6 +103,27 @@ describe('runCli', () => {
     expect(r.out).not.toMatch(/NaN|Infinity/)
   })
 
+  it('uses US units in the tables with --units US', () => {
+    const r = run([example('eccentric-box.json'), '--units', 'US'])
+    expect(r.code).toBe(EXIT_OK)
+    expect(r.out).toContain('Units: US (length ft, displacement in, mass kip·s²/in, force kip, stiffness kip/in)')
+    // 3.5 m / 0.3048 m/ft = 11.48 ft (NIST SP 811 B.8)
+    expect(r.out).toMatch(/^\s*1\s+Roof\s+11\.48\s/m)
+  })
+
+  it('runs the time history with --time-history and lists the peaks', () => {
+    const r = run(['--time-history'])
+    expect(r.code).toBe(EXIT_OK)
+    expect(r.out).toMatch(/^Time history \(.*Newmark average acceleration\)$/m)
+    expect(r.out).not.toMatch(/NaN|Infinity/)
+  })
+
+  it('passes --criteria to the engine: an unknown id is an issue, not a crash', () => {
+    const r = run([example('eccentric-box.json'), '--criteria', 'no-such-set'])
+    expect(r.code).toBe(EXIT_OK)
+    expect(r.out).toMatch(/warning criterion-unknown: .*no-such-set/)
+  })
+
   it('prints the eccentric box JSON with the hand-calculated centres (--json)', () => {
     const r = run([example('eccentric-box.json'), '--json'])
     expect(r.code).toBe(EXIT_OK)
