@@ -77,6 +77,13 @@ describe('runCli', () => {
     expect(r.err).toContain('version 7 is newer than this Gyre (reads up to 1): update Gyre')
   })
 
+  it('exits 1 when the engine cannot analyze a valid file (no floors)', () => {
+    const r = run(['empty.json'], { 'empty.json': '{"format": "gyre-project", "version": 1, "floors": []}' })
+    expect(r.code).toBe(EXIT_INVALID)
+    expect(r.err).toContain('the model cannot be analyzed')
+    expect(r.err).toMatch(/^error no-floors: /m)
+  })
+
   it('exits 2 for a mechanism and names the floor and the direction on stderr', () => {
     const r = run([example('mechanism-x.json')])
     expect(r.code).toBe(EXIT_MECHANISM)
