@@ -96,3 +96,59 @@ describe('pushDiff / undoStep / squashStep', () => {
     expect(undoStep(c, s).doc).toEqual(a)
   })
 })
+
+describe('history round trip (seeded random command sequences)', () => {
+  it('undoes every step back to the start and redoes every step back to the end', async () => {
+    const fc = await import('fast-check')
+    const { createEditorStore, execute, mark, redo, undo } = await import('@/editor')
+    const op = fc.oneof(
+      fc.record({ t: fc.constant('mark' as const) }),
+      fc.record({
+        t: fc.constant('move' as const),
+        id: fc.constantFrom('w1', 'w2', 'c1', 's1', 'pm1', 'lm1', 'f1'),
+        dx: fc.double({ min: -3, max: 3, noNaN: true }),
+        dy: fc.double({ min: -3, max: 3, noNaN: true }),
+      }),
+      fc.record({ t: fc.constant('wall' as const), x: fc.double({ min: 0, max: 10, noNaN: true }) }),
+      fc.record({ t: fc.constant('delete' as const), id: fc.constantFrom('w1', 'c1', 'pm1', 'concrete') }),
+      fc.record({ t: fc.constant('height' as const), h: fc.double({ min: -1, max: 5, noNaN: true }) }),
+      fc.record({ t: fc.constant('unlink' as const) }),
+    )
+    fc.assert(
+      fc.property(fc.array(op, { maxLength: 40 }), (ops) => {
+        const store = createEditorStore(smallFixture())
+        const start = structuredClone(store.getState().doc)
+        for (const o of ops) {
+          switch (o.t) {
+            case 'mark':
+              mark(store)
+              break
+            case 'move':
+              execute(store, 'moveElements', { ids: [o.id], dx: o.dx, dy: o.dy })
+              break
+            case 'wall':
+              execute(store, 'addWall', { p1: { x: o.x, y: 1 }, p2: { x: o.x, y: 3 } })
+              break
+            case 'delete':
+              execute(store, 'deleteElements', { ids: [o.id] })
+              break
+            case 'height':
+              execute(store, 'setFloorHeight', { floor: 'L2' as never, height: o.h })
+              break
+            case 'unlink':
+              execute(store, 'unlinkTypicalFloor', { floor: 'L3' as never })
+              break
+          }
+        }
+        const end = structuredClone(store.getState().doc)
+        let guard = 0
+        while (undo(store) && guard++ < 100);
+        expect(store.getState().doc).toEqual(start)
+        guard = 0
+        while (redo(store) && guard++ < 100);
+        expect(store.getState().doc).toEqual(end)
+      }),
+      { seed: 20261202, numRuns: 150 },
+    )
+  })
+})

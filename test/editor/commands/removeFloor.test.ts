@@ -70,3 +70,19 @@ describe('removeFloor', () => {
     checkRefused(store, 'removeFloor', { floor: 'Lq' as FloorId }, 'floor: unknown floor "Lq"')
   })
 })
+
+describe('removeFloor on the demo building', () => {
+  it('gives each floor that followed the removed typical floor its own slab and facade mass', () => {
+    const store = createTestEditor('demo')
+    checkDoUndoRedo(store, 'removeFloor', { floor: 'L2' as FloorId }, (doc) => {
+      for (const id of ['L3', 'L4', 'L5', 'L6']) {
+        expect(doc.floors.find((f) => f.id === id)?.typicalOf).toBeUndefined()
+        const slabs = Object.values(doc.slabs).filter((s) => s.floor === id)
+        expect(slabs).toHaveLength(1)
+        expect(slabs[0]?.outline).toHaveLength(6)
+        expect(Object.values(doc.lineMasses).filter((m) => m.floor === id)).toHaveLength(1)
+      }
+      expect(doc.slabs['s-L2']).toBeUndefined()
+    })
+  })
+})
