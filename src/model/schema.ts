@@ -991,6 +991,7 @@ const CRITERION_FIELDS = [
   'source',
   'irregularRatio',
   'extremeRatio',
+  'ratioQuantity',
   'amplification',
   'eccentricityToRadius',
   'radiusToGyration',
@@ -1008,6 +1009,10 @@ function readCriterionSet(ctx: Ctx, p: string, v: unknown): CriterionSetSpec | u
   const ratio = { gt: 0, max: 10 }
   for (const f of ['irregularRatio', 'extremeRatio', 'eccentricityToRadius', 'radiusToGyration'] as const) {
     if (o[f] !== undefined) out[f] = num(ctx, key(p, f), o[f], ratio)
+  }
+  if (o.ratioQuantity !== undefined) {
+    const quantities = ['drift', 'displacement'] as const
+    out.ratioQuantity = oneOf(ctx, key(p, 'ratioQuantity'), o.ratioQuantity, quantities)
   }
   if (o.accidentalEccentricity !== undefined) {
     out.accidentalEccentricity = num(ctx, key(p, 'accidentalEccentricity'), o.accidentalEccentricity, {
@@ -1353,6 +1358,7 @@ const KEY_ORDER = [
   'source',
   'irregularRatio',
   'extremeRatio',
+  'ratioQuantity',
   'amplification',
   'divisor',
   'power',
