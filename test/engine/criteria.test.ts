@@ -1,5 +1,7 @@
+import { readFileSync } from 'node:fs'
 import { describe, expect, it } from 'vitest'
-import { CAUTION } from '@/model'
+import { CAUTION, parseProject } from '@/model'
+import { analyzeProject } from '@/engine'
 import type { AnalysisSettings, CriterionSetSpec } from '@/model'
 import {
   BUILT_IN_CRITERION_SETS,
@@ -210,5 +212,49 @@ describe('torsionCheckRows without movement', () => {
       'not-applicable',
       'not-applicable',
     ])
+  })
+})
+
+describe('user criterion sets from a project file', () => {
+  it('load with ratioQuantity and evaluate on displacements', () => {
+    const raw = JSON.parse(readFileSync('public/examples/corner-block.json', 'utf8')) as {
+      settings: Record<string, unknown>
+    }
+    raw.settings.criterionSet = 'office-b'
+    raw.settings.criterionSets = [
+      {
+        id: 'office-b',
+        name: 'Office displacement rule',
+        source: 'Invented office rule for this test',
+        irregularRatio: 1.5,
+        ratioQuantity: 'displacement',
+        accidentalEccentricity: 0.1,
+      },
+    ]
+    const parsed = parseProject(raw)
+    expect(parsed.ok).toBe(true)
+    if (!parsed.ok) return
+    const r = resolveCriterionSet(parsed.project.settings)
+    expect(r.set?.ratioQuantity).toBe('displacement')
+    const res = analyzeProject(parsed.project, { spectrum: false })
+    expect(res.torsion!.eccentricityFraction).toBeCloseTo(0.1, 12)
+    const row = res.torsion!.criterion.rows[0]!
+    const story = res.torsion!.cases[0]!.stories[0]!
+    // the row's value is the displacement ratio, not the drift ratio (set data, ratioQuantity)
+    expect(row.value).toBeCloseTo(story.displacementRatio, 12)
+    expect(res.torsion!.criterion.source).toBe('Invented office rule for this test')
+  })
+
+  it('refuses an unknown ratioQuantity at load, naming the field', () => {
+    const raw = JSON.parse(readFileSync('public/examples/corner-block.json', 'utf8')) as {
+      settings: Record<string, unknown>
+    }
+    raw.settings.criterionSets = [
+      { id: 'x', name: 'x', source: 'x', irregularRatio: 1.2, ratioQuantity: 'rotation' },
+    ]
+    const parsed = parseProject(raw)
+    expect(parsed.ok).toBe(false)
+    if (parsed.ok) return
+    expect(parsed.errors.join('\n')).toContain('ratioQuantity')
   })
 })

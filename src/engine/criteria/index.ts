@@ -81,9 +81,9 @@ export function validateCriterionSet(set: CriterionSetSpec, path: string): strin
   positive('extremeRatio', set.extremeRatio)
   positive('eccentricityToRadius', set.eccentricityToRadius)
   positive('radiusToGyration', set.radiusToGyration)
-  positive('accidentalEccentricity', set.accidentalEccentricity)
-  if (set.accidentalEccentricity !== undefined && set.accidentalEccentricity >= 0.5) {
-    errors.push(`${path}.accidentalEccentricity: must be < 0.5 (got ${set.accidentalEccentricity})`)
+  const e = set.accidentalEccentricity
+  if (e !== undefined && !(typeof e === 'number' && e >= 0 && e <= 0.5)) {
+    errors.push(`${path}.accidentalEccentricity: must be a number in [0, 0.5] (got ${String(e)})`)
   }
   if (
     set.ratioQuantity !== undefined &&
@@ -95,7 +95,9 @@ export function validateCriterionSet(set: CriterionSetSpec, path: string): strin
   const a = set.amplification
   if (a) {
     positive('amplification.divisor', a.divisor)
-    positive('amplification.power', a.power)
+    if (!(typeof a.power === 'number' && a.power >= 0)) {
+      errors.push(`${path}.amplification.power: must be a number >= 0 (got ${String(a.power)})`)
+    }
     positive('amplification.min', a.min)
     positive('amplification.max', a.max)
     if (a.min > a.max) errors.push(`${path}.amplification: min must be <= max`)
