@@ -25,16 +25,22 @@ const eccentricity = (cm: PlanPoint, cr: PlanPoint): number => distance(cm, cr)
 describe('building a 5-storey block from scratch', () => {
   it('builds, balances, undoes, saves and reloads with no console errors', async () => {
     const { page, context, errors } = await session.newPage()
+    const t0 = Date.now()
+    const step = (name: string): void => {
+      if (process.env.GYRE_TEST_STEPS) console.log(`[scenario] ${name} at ${Date.now() - t0} ms`)
+    }
     await openApp(page, session.url)
     await page.getByTestId('action-new').click()
     await page.getByTestId('confirm-replace').click()
     await expect(page.locator('[data-floor-id]').count()).resolves.toBe(1)
 
+    step('blank')
     // Floors first (new elements span the ground to the top floor).
     for (let i = 0; i < 4; i++) await page.getByTestId('floor-add').click()
     await expect(page.locator('[data-floor-id]').count()).resolves.toBe(5)
     await page.getByTestId('floor-1').click()
 
+    step('floors')
     // L-shaped slab on floor 1, by clicking its corners on the 6 m grid and the first corner again.
     await page.getByTestId('action-tool-slab').click()
     const L: PlanPoint[] = [
@@ -49,6 +55,7 @@ describe('building a 5-storey block from scratch', () => {
     await clickPlan(page, L[0] as PlanPoint)
     await expect(countRecords(page, 'slabs')).resolves.toBe(1)
 
+    step('slab')
     // Floors 2 to 5 are typical floors of floor 1 (same slab and masses).
     for (let n = 2; n <= 5; n++) {
       await page.getByTestId(`floor-${n}`).click()
@@ -56,6 +63,7 @@ describe('building a 5-storey block from scratch', () => {
     }
     await page.getByTestId('floor-1').click()
 
+    step('links')
     // Three walls, all on the west side: the plan is eccentric on purpose.
     await page.getByTestId('action-tool-wall').click()
     const walls: [PlanPoint, PlanPoint][] = [
@@ -69,6 +77,7 @@ describe('building a 5-storey block from scratch', () => {
     }
     await expect(countRecords(page, 'walls')).resolves.toBe(3)
 
+    step('walls')
     // Two frame lines on the south and east faces.
     await page.getByTestId('action-tool-frame').click()
     await clickPlan(page, { x: 6, y: 0 })
@@ -77,6 +86,7 @@ describe('building a 5-storey block from scratch', () => {
     await clickPlan(page, { x: 24, y: 12 })
     await expect(countRecords(page, 'frameLines')).resolves.toBe(2)
 
+    step('frames')
     // Four columns.
     await page.getByTestId('action-tool-column').click()
     for (const p of [
@@ -91,6 +101,7 @@ describe('building a 5-storey block from scratch', () => {
     await page.getByTestId('action-tool-pick').click()
     await page.keyboard.press('Escape')
 
+    step('columns')
     await waitForCurrentAnalysis(page)
     await page.waitForSelector('[data-testid="marker-cr"]')
     const cm = await markerAt(page, 'cm')
@@ -104,6 +115,7 @@ describe('building a 5-storey block from scratch', () => {
     const e0 = eccentricity(cm, cr)
     await session.screenshot(page, 'scenario-built')
 
+    step('centres')
     // Move the long west wall 6 m east, towards the centre of mass.
     await dragPlan(page, { x: 0, y: 12 }, { x: 6, y: 12 }, 10, () => page.waitForTimeout(30))
     await waitForCurrentAnalysis(page)
@@ -116,12 +128,14 @@ describe('building a 5-storey block from scratch', () => {
     expect(e1).toBeLessThan(e0 - 1)
     await session.screenshot(page, 'scenario-balanced')
 
+    step('moved')
     // Undo puts the wall and the centres back exactly.
     await page.getByTestId('action-undo').click()
     await waitForCurrentAnalysis(page)
     const crBack = await markerAt(page, 'cr')
     expect(distance(crBack, cr)).toBeLessThan(1e-9)
 
+    step('undone')
     // Save: the download is the project file with everything in it.
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('action-save').click()])
     const stream = await download.createReadStream()
@@ -141,6 +155,7 @@ describe('building a 5-storey block from scratch', () => {
     expect(Object.keys(saved.columns).length).toBe(4)
     expect(Object.keys(saved.slabs).length).toBe(1)
 
+    step('saved')
     // Reload: the autosaved model is back, with the same centres.
     await page.reload()
     await page.waitForSelector('[data-testid="plan-canvas"]')
@@ -151,5 +166,5 @@ describe('building a 5-storey block from scratch', () => {
     await session.screenshot(page, 'scenario-reloaded')
     expect(errors).toEqual([])
     await context.close()
-  })
+  }, 300000)
 })
