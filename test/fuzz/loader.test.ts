@@ -21,6 +21,9 @@ const LOADER_RUNS = Number.isFinite(envRuns) && envRuns > 0 ? envRuns : 2000
 const ENGINE_RUNS = Number.isFinite(envRuns) && envRuns > 0 ? envRuns : 300
 const envSeed = Number(process.env.GYRE_FUZZ_SEED)
 const SEED = Number.isInteger(envSeed) ? envSeed : 20261202
+/** Per-test time limits that grow with a long run (the default 30 s is for the default counts). */
+const LOADER_TIMEOUT = 30_000 + LOADER_RUNS * 20
+const ENGINE_TIMEOUT = 30_000 + ENGINE_RUNS * 200
 
 type Json = null | boolean | number | string | Json[] | { [k: string]: Json }
 
@@ -257,7 +260,7 @@ describe('parseProject (fuzz)', () => {
       }),
       { numRuns: Math.ceil(LOADER_RUNS / 4), seed: SEED },
     )
-  })
+  }, LOADER_TIMEOUT)
 
   it('never throws on random objects that carry the format tag and a version', () => {
     const arb = fc
@@ -276,7 +279,7 @@ describe('parseProject (fuzz)', () => {
       }),
       { numRuns: Math.ceil(LOADER_RUNS / 4), seed: SEED + 1 },
     )
-  })
+  }, LOADER_TIMEOUT)
 
   it('refuses mutated models clearly or accepts them so that they round-trip through the file text', () => {
     let accepted = 0
@@ -297,7 +300,7 @@ describe('parseProject (fuzz)', () => {
     )
     // Not a tautology: some mutations (a deleted record, a scaled value) must still be valid.
     expect(accepted).toBeGreaterThan(LOADER_RUNS / 40)
-  })
+  }, LOADER_TIMEOUT)
 })
 
 describe('analyzeProject on accepted fuzzed models', () => {
@@ -317,7 +320,7 @@ describe('analyzeProject on accepted fuzzed models', () => {
     )
     expect(analyzed).toBeGreaterThan(ENGINE_RUNS / 4)
     expect(statuses.get('ok') ?? 0).toBeGreaterThan(0)
-  })
+  }, ENGINE_TIMEOUT)
 
   it('also keeps the time history finite on a few accepted mutants', () => {
     fc.assert(
@@ -328,7 +331,7 @@ describe('analyzeProject on accepted fuzzed models', () => {
       }),
       { numRuns: Math.max(10, Math.ceil(ENGINE_RUNS / 30)), seed: SEED + 4 },
     )
-  })
+  }, ENGINE_TIMEOUT)
 
   it('reports the mechanism example as an issue naming floor and direction', () => {
     const r = parseProject(clone(mechanism))
