@@ -232,6 +232,11 @@ describe('parseProject', () => {
       'settings.directionCombination: must be one of "srss", "100-30", got "abs"',
       'settings.groundMotion.ay: must have as many samples as ax (3), got 2',
     ])
+    const ratio = copy(box)
+    setPath(ratio, 'settings.criterionSets', [{ id: 'mine', source: 'office rule', ratioQuantity: 'rotation' }])
+    expect(errorsOf(ratio)).toEqual([
+      'settings.criterionSets[0].ratioQuantity: must be one of "drift", "displacement", got "rotation"',
+    ])
     const asce = copy(box)
     setPath(asce, 'settings.spectrum.SD1', -0.6)
     setPath(asce, 'settings.spectrum.kind', 'asce7')
