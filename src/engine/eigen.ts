@@ -167,7 +167,7 @@ export function reduceToStandard(
       A[r1 + j] = a1 * s
     }
   }
-  symmetrize(A, n)
+  // No symmetrization pass: every consumer of A reads its lower triangle only.
   return { form: { n, A, S }, issues }
 }
 
@@ -196,16 +196,6 @@ function toStandardLoad(form: StandardForm, v: Float64Array): Float64Array {
     b[o + 2] = form.S[4 * f + 1]! * v[o]! + form.S[4 * f + 2]! * v[o + 1]! + form.S[4 * f + 3]! * v[o + 2]!
   }
   return b
-}
-
-function symmetrize(A: Float64Array, n: number): void {
-  for (let i = 0; i < n; i++) {
-    for (let j = i + 1; j < n; j++) {
-      const v = 0.5 * (A[i * n + j]! + A[j * n + i]!)
-      A[i * n + j] = v
-      A[j * n + i] = v
-    }
-  }
 }
 
 // ---------------------------------------------------------------- dense symmetric eigensolver
@@ -619,44 +609,67 @@ export function choleskySolveRows(L: Float64Array, n: number, B: Float64Array, c
 
 /**
  * Inertia count of A - sigma I by LDL' without pivoting: the number of negative pivots, i.e. the number
- * of eigenvalues of A below sigma (Sylvester's law of inertia). Returns null when a pivot is so small
- * that the count is not reliable (the caller moves the shift).
+ * of eigenvalues of A below sigma (Sylvester's law of inertia). Only the lower triangle of A is read.
+ * With `inPlace` the factor overwrites A's lower triangle (saves an n² buffer; A is then spent).
+ * Returns null when a pivot is so small that the count is not reliable (the caller moves the shift).
+ * Rows are factored two at a time so each row of L already computed is loaded once for both.
  */
-export function sturmCount(
-  A: Float64Array,
-  n: number,
-  sigma: number,
-  work?: Float64Array,
-): number | null {
-  // `work` (n² long) is reused for the factor when the caller has a spare buffer
-  const L = work && work.length >= n * n ? work : new Float64Array(n * n)
+export function sturmCount(A: Float64Array, n: number, sigma: number, inPlace = false): number | null {
+  const L = inPlace ? A : new Float64Array(A)
   const D = new Float64Array(n)
-  const w = new Float64Array(n)
+  const w0 = new Float64Array(n)
+  const w1 = new Float64Array(n)
   let scale = 0
   for (let i = 0; i < n; i++) scale = Math.max(scale, Math.abs(A[i * n + i]! - sigma))
+  const tiny = 1e-13 * scale
   let negatives = 0
-  for (let i = 0; i < n; i++) {
-    const ri = i * n
+  let i = 0
+  for (; i + 1 < n; i += 2) {
+    const r0 = i * n
+    const r1 = r0 + n
     for (let j = 0; j < i; j++) {
       const rj = j * n
-      let s = A[ri + j]!
-      let k = 0
-      for (; k + 3 < j; k += 4) {
-        s -=
-          w[k]! * L[rj + k]! +
-          w[k + 1]! * L[rj + k + 1]! +
-          w[k + 2]! * L[rj + k + 2]! +
-          w[k + 3]! * L[rj + k + 3]!
+      let s0 = L[r0 + j]!
+      let s1 = L[r1 + j]!
+      for (let k = 0; k < j; k++) {
+        const l = L[rj + k]!
+        s0 -= w0[k]! * l
+        s1 -= w1[k]! * l
       }
-      for (; k < j; k++) s -= w[k]! * L[rj + k]!
-      w[j] = s
-      L[ri + j] = s / D[j]!
+      const dj = D[j]!
+      w0[j] = s0
+      w1[j] = s1
+      L[r0 + j] = s0 / dj
+      L[r1 + j] = s1 / dj
     }
-    let dii = A[ri + i]! - sigma
-    for (let k = 0; k < i; k++) dii -= w[k]! * L[ri + k]!
-    if (!(Math.abs(dii) > 1e-13 * scale)) return null
-    D[i] = dii
-    if (dii < 0) negatives++
+    let d0 = L[r0 + i]! - sigma
+    for (let k = 0; k < i; k++) d0 -= w0[k]! * L[r0 + k]!
+    if (!(Math.abs(d0) > tiny)) return null
+    D[i] = d0
+    if (d0 < 0) negatives++
+    let s = L[r1 + i]!
+    for (let k = 0; k < i; k++) s -= w1[k]! * L[r0 + k]!
+    w1[i] = s
+    L[r1 + i] = s / d0
+    let d1 = L[r1 + i + 1]! - sigma
+    for (let k = 0; k <= i; k++) d1 -= w1[k]! * L[r1 + k]!
+    if (!(Math.abs(d1) > tiny)) return null
+    D[i + 1] = d1
+    if (d1 < 0) negatives++
+  }
+  if (i < n) {
+    const r0 = i * n
+    for (let j = 0; j < i; j++) {
+      const rj = j * n
+      let s0 = L[r0 + j]!
+      for (let k = 0; k < j; k++) s0 -= w0[k]! * L[rj + k]!
+      w0[j] = s0
+      L[r0 + j] = s0 / D[j]!
+    }
+    let d0 = L[r0 + i]! - sigma
+    for (let k = 0; k < i; k++) d0 -= w0[k]! * L[r0 + k]!
+    if (!(Math.abs(d0) > tiny)) return null
+    if (d0 < 0) negatives++
   }
   return negatives
 }
@@ -722,7 +735,11 @@ export function solveEigen(
   const { form, issues } = reduceToStandard(K, M, n, floorNames)
   if (!form) return empty(issues, 'none')
   if ((options.method ?? 'all') === 'all') return solveAll(form)
-  return solveLowest(form, M, options) ?? solveAll(form, ' (Lanczos fallback)')
+  const rebuild = (): Float64Array => reduceToStandard(K, M, n, floorNames).form!.A
+  const low = solveLowest(form, M, options, rebuild)
+  if (low) return low
+  // form.A may have been spent by an in-place Sturm factorization
+  return solveAll(reduceToStandard(K, M, n, floorNames).form!, ' (Lanczos fallback)')
 }
 
 function solveAll(form: StandardForm, note = ''): EigenSolution {
@@ -751,7 +768,12 @@ function dot(a: Float64Array, ao: number, b: Float64Array, bo: number, n: number
  * Block Lanczos on A^-1 with full re-orthogonalisation and a Sturm check. Returns null when A is not
  * positive definite or the Sturm count shows a missed mode (the caller then uses the dense solver).
  */
-function solveLowest(form: StandardForm, M: Float64Array, options: EigenOptions): EigenSolution | null {
+function solveLowest(
+  form: StandardForm,
+  M: Float64Array,
+  options: EigenOptions,
+  rebuildA: () => Float64Array,
+): EigenSolution | null {
   const n = form.n
   const nf = n / 3
   const minCount = Math.min(n, Math.max(1, Math.floor(options.count ?? 12)))
@@ -983,7 +1005,15 @@ function solveLowest(form: StandardForm, M: Float64Array, options: EigenOptions)
     const hi = ritzValues[count]!
     sigma = lo + 0.5 * (hi - lo)
     for (let attempt = 0; attempt < 4 && sCount === null; attempt++) {
-      sCount = sturmCount(form.A, n, sigma, L ?? undefined)
+      // factor in place in a spare n² buffer: Cholesky's when it exists, else A itself (rebuilt on retry)
+      let work: Float64Array
+      if (L) {
+        L.set(form.A)
+        work = L
+      } else {
+        work = attempt === 0 ? form.A : rebuildA()
+      }
+      sCount = sturmCount(work, n, sigma, true)
       if (sCount === null) sigma = lo + (0.3 + 0.15 * attempt) * (hi - lo)
     }
     if (sCount !== count) return null
