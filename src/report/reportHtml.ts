@@ -298,8 +298,8 @@ ul.notes { font-size: 8.5pt; color: var(--muted); margin: 2mm 0 0; padding-left:
 ul.method { padding-left: 5mm; }
 ul.method li { margin-bottom: 1mm; }
 .legend { font-size: 9pt; color: var(--muted); }
-.key-cm { color: #1d6470; font-weight: 700; }
-.key-cr { color: #a4492b; }
+.key-cm { color: #b4652a; font-weight: 700; }
+.key-cr { color: #2b7a86; }
 figure.plan { margin: 0 0 6mm; break-inside: avoid; }
 figure.plan figcaption { font-size: 9pt; color: var(--muted); text-align: center; }
 svg.plan-sketch { display: block; max-height: 120mm; margin: 0 auto; }
@@ -307,10 +307,10 @@ svg.plan-sketch { display: block; max-height: 120mm; margin: 0 auto; }
 .g-wall { stroke: #33383f; stroke-linecap: butt; }
 .g-frame { stroke: #3f5f8a; stroke-width: 2; stroke-dasharray: 7 4; }
 .g-column { fill: #6b7078; }
-.g-cm circle { fill: #ffffff; stroke: #1d6470; stroke-width: 1.6; }
-.g-cm path { stroke: #1d6470; stroke-width: 1.2; }
-.g-cr { fill: #a4492b; stroke: #ffffff; stroke-width: 0.8; }
-.g-trail { fill: none; stroke: #a4492b; stroke-width: 0.8; stroke-opacity: 0.6; }
+.g-cm circle { fill: #ffffff; stroke: #b4652a; stroke-width: 1.6; }
+.g-cm path { stroke: #b4652a; stroke-width: 1.2; }
+.g-cr { fill: #2b7a86; stroke: #ffffff; stroke-width: 0.8; }
+.g-trail { fill: none; stroke: #2b7a86; stroke-width: 0.8; stroke-opacity: 0.6; }
 .g-label { font-size: 10px; fill: #4a4f57; }
 .g-scale { fill: none; stroke: #4a4f57; stroke-width: 1.2; }
 .pre { white-space: pre-wrap; }
