@@ -1,0 +1,82 @@
+/**
+ * Render smoke tests in node with react-dom/server: the pinned jsdom needs Node 22 while the
+ * project runs on Node 20, so these check the markup of each state; clicks are covered by the
+ * runner tests and belong in the browser suite.
+ */
+import { renderToStaticMarkup } from 'react-dom/server'
+import { describe, expect, it } from 'vitest'
+import { CAUTION, CAUTION_SHORT } from '@/model'
+import { BalancePanel, BalancePanelView } from '@/ui/extras'
+import type { BalanceRunner } from '@/ui/extras'
+import { boxProject, fakeBalance } from './fixtures'
+
+const noop = (): void => {}
+const stubRunner = (): BalanceRunner => ({
+  inWorker: true,
+  run: () => new Promise(() => {}),
+  dispose: noop,
+})
+
+const view = (over: Partial<Parameters<typeof BalancePanelView>[0]> = {}): string =>
+  renderToStaticMarkup(
+    <BalancePanelView
+      phase="idle"
+      result={null}
+      error={null}
+      elapsedS={0}
+      isStale={false}
+      inWorker
+      onFind={noop}
+      onApply={noop}
+      {...over}
+    />,
+  )
+
+describe('BalancePanel', () => {
+  it('renders a Find changes button and the caution before any search', () => {
+    const html = renderToStaticMarkup(
+      <BalancePanel project={boxProject()} onApply={noop} createRunner={stubRunner} />,
+    )
+    expect(html).toContain('data-testid="balance-find"')
+    expect(html).toContain('>Find changes</button>')
+    expect(html).toContain(CAUTION_SHORT)
+    expect(html).toContain(`title="${CAUTION}"`)
+    expect(html).not.toContain('balance-apply-0')
+  })
+})
+
+describe('BalancePanelView', () => {
+  it('shows a working state with a disabled button while searching', () => {
+    const html = view({ phase: 'working', elapsedS: 3 })
+    expect(html).toContain('data-testid="balance-working"')
+    expect(html).toMatch(/data-testid="balance-find" disabled=""/)
+    expect(html).toContain('3 s')
+  })
+
+  it('lists each suggestion with before/after numbers and an Apply button', () => {
+    const result = fakeBalance(boxProject())
+    const html = view({ phase: 'done', result })
+    expect(html).toContain('data-testid="balance-apply-0"')
+    expect(html).toContain('data-testid="balance-apply-1"')
+    expect(html).not.toContain('data-testid="balance-apply-2"')
+    expect(html).toContain('Move frame line &#x27;West line&#x27; 2.50 m towards +x (to x = 2.50 m)')
+    // formatNumber to 3 significant digits: 0.2983 -> 0.298, 1.3 -> 1.3
+    expect(html).toContain('0.298')
+    expect(html).toContain('score S')
+    expect(html).toContain('worst e/r')
+    expect(html).toContain('worst drift max/avg')
+    expect(html).toContain(CAUTION_SHORT)
+  })
+
+  it('disables Apply and says so when the model changed since the search', () => {
+    const html = view({ phase: 'done', result: fakeBalance(boxProject()), isStale: true })
+    expect(html).toContain('data-testid="balance-stale"')
+    expect(html).toMatch(/data-testid="balance-apply-0"[^>]*disabled=""/)
+  })
+
+  it('shows the error text and the engine message when there is nothing to suggest', () => {
+    expect(view({ phase: 'error', error: '[balance] boom' })).toContain('[balance] boom')
+    const empty = { ...fakeBalance(boxProject()), suggestions: [], message: 'Already balanced.' }
+    expect(view({ phase: 'done', result: empty })).toContain('Already balanced.')
+  })
+})
