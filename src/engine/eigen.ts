@@ -209,8 +209,10 @@ export function symmetricEigen(
   Ain: Float64Array,
   n: number,
   wanted = n,
+  overwrite = false,
 ): { values: Float64Array; vectors: Float64Array } {
-  const A = new Float64Array(Ain)
+  // with `overwrite` the input is used as the work array (it is spent afterwards)
+  const A = overwrite ? Ain : new Float64Array(Ain)
   const d = new Float64Array(n)
   const e = new Float64Array(n)
   const beta = new Float64Array(n)
@@ -697,12 +699,22 @@ function normalizeSigns(vectors: Float64Array, n: number, count: number): void {
   }
 }
 
+/** phi = S z for each row of Z, in place (S acts within each floor's three entries). */
 function backTransform(form: StandardForm, Z: Float64Array, count: number): Float64Array {
   const n = form.n
-  const out = new Float64Array(count * n)
-  for (let m = 0; m < count; m++) out.set(fromStandard(form, Z, m * n), m * n)
-  normalizeSigns(out, n, count)
-  return out
+  const nf = n / 3
+  const S = form.S
+  for (let m = 0; m < count; m++) {
+    for (let f = 0; f < nf; f++) {
+      const o = m * n + 3 * f
+      const z2 = Z[o + 2]!
+      Z[o] = S[4 * f]! * Z[o]! + S[4 * f + 1]! * z2
+      Z[o + 1] = S[4 * f]! * Z[o + 1]! + S[4 * f + 2]! * z2
+      Z[o + 2] = S[4 * f + 3]! * z2
+    }
+  }
+  normalizeSigns(Z, n, count)
+  return Z
 }
 
 function matVecRowMajor(A: Float64Array, n: number, x: Float64Array, out: Float64Array): void {
@@ -748,7 +760,7 @@ export function solveEigen(
 
 function solveAll(form: StandardForm, note = ''): EigenSolution {
   const n = form.n
-  const { values, vectors } = symmetricEigen(form.A, n)
+  const { values, vectors } = symmetricEigen(form.A, n, n, true)
   return {
     count: n,
     dofCount: n,
