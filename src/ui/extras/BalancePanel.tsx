@@ -97,7 +97,9 @@ export function BalancePanelView(props: BalancePanelViewProps) {
             <ol className="gx-suggestions" data-testid="balance-suggestions">
               {suggestions.map((s, i) => (
                 <li key={`${s.elementId}-${s.action}-${i}`} className="gx-suggestion">
-                  <p className="gx-desc">{s.description}</p>
+                  <p className="gx-desc">
+                    <span className="gx-rank">{i + 1}.</span> {s.description}
+                  </p>
                   <dl className="gx-metrics">
                     <dt>score S</dt>
                     <dd>
