@@ -237,6 +237,34 @@ describe('solveEigen', () => {
     }
   })
 
+  it('finds both modes of every repeated X/Y pair on a square symmetric plan', () => {
+    // identical frames along X and Y: every X frequency is also a Y frequency (multiplicity 2)
+    const floors = 70
+    const ks = Array.from({ length: floors }, (_, i) => 3e8 * (1 - (0.5 * i) / floors))
+    const s = structureFromParts(
+      Array.from({ length: floors }, () => ({ mass: 3e5, J: 3e5 * 30 })),
+      [
+        { at: { x: 0, y: -6 }, angle: 0, storyStiffness: ks },
+        { at: { x: 0, y: 6 }, angle: 0, storyStiffness: ks },
+        { at: { x: -6, y: 0 }, angle: Math.PI / 2, storyStiffness: ks },
+        { at: { x: 6, y: 0 }, angle: Math.PI / 2, storyStiffness: ks },
+      ],
+    )
+    const n = s.dofCount
+    const full = solveEigen(s.stiffness, s.mass, n)
+    // pairs: full solution has equal eigenvalues two by two among the translational ones
+    expect(Math.abs(full.eigenvalues[1]! / full.eigenvalues[0]! - 1)).toBeLessThan(1e-10)
+    const low = solveEigen(s.stiffness, s.mass, n, { method: 'lowest', count: 10, massTarget: 0.9 })
+    expect(low.solver).toContain('Lanczos')
+    // Sturm count (Bathe §11.4.3) proves no copy of a repeated eigenvalue was missed
+    expect(low.sturmCount).toBe(low.count)
+    for (let k = 0; k < low.count; k++) {
+      expect(Math.abs(low.eigenvalues[k]! / full.eigenvalues[k]! - 1)).toBeLessThan(1e-9)
+    }
+    const { orth } = residuals(s, low.eigenvalues, low.vectors, low.count)
+    expect(orth).toBeLessThan(1e-10)
+  })
+
   it('keeps finding modes until every mode with a period above the cutoff is in', () => {
     const s = randomStructure(40, 41)
     const n = s.dofCount
