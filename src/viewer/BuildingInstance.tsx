@@ -26,8 +26,8 @@ export interface SharedResources {
   readonly ghostMaterial: THREE.LineBasicMaterial
   readonly cmGeometry: THREE.BufferGeometry
   readonly crGeometry: THREE.BufferGeometry
-  readonly cmMaterial: THREE.MeshStandardMaterial
-  readonly crMaterial: THREE.MeshStandardMaterial
+  readonly cmMaterial: THREE.MeshBasicMaterial
+  readonly crMaterial: THREE.MeshBasicMaterial
   readonly cmLineMaterial: THREE.LineBasicMaterial
   readonly crLineMaterial: THREE.LineBasicMaterial
 }
@@ -101,19 +101,21 @@ function writeColours(
   story: Int32Array,
   values: readonly number[] | null,
   base: THREE.Color,
+  shade: Float32Array | null,
 ): void {
   const arr = attr.array as Float32Array
   for (let v = 0; v < story.length; v++) {
     const t = values ? values[story[v]!] : undefined
+    const k = shade ? shade[v]! : 1
     if (t === undefined) {
-      arr[3 * v] = base.r
-      arr[3 * v + 1] = base.g
-      arr[3 * v + 2] = base.b
+      arr[3 * v] = base.r * k
+      arr[3 * v + 1] = base.g * k
+      arr[3 * v + 2] = base.b * k
     } else {
       const [r, g, b] = rampColour(t)
-      arr[3 * v] = r
-      arr[3 * v + 1] = g
-      arr[3 * v + 2] = b
+      arr[3 * v] = r * k
+      arr[3 * v + 1] = g * k
+      arr[3 * v + 2] = b * k
     }
   }
   attr.needsUpdate = true
@@ -135,9 +137,9 @@ export function BuildingInstance(props: Props) {
 
   const own = useMemo(() => {
     const slabMaterials = layout.floors.map(
-      () => new THREE.MeshStandardMaterial({ color: SLAB_COLOUR, roughness: 0.85, metalness: 0 }),
+      () => new THREE.MeshBasicMaterial({ color: SLAB_COLOUR, vertexColors: true }),
     )
-    const memberMaterial = new THREE.MeshStandardMaterial({ vertexColors: true, roughness: 0.7 })
+    const memberMaterial = new THREE.MeshBasicMaterial({ vertexColors: true })
     const frameMaterial = new THREE.LineBasicMaterial({ vertexColors: true })
     return {
       slabMaterials,
@@ -207,9 +209,9 @@ export function BuildingInstance(props: Props) {
     if (key !== colourKey.current || !m) {
       colourKey.current = key
       const values = colourValues(m, s.colourBy)
-      writeColours(own.walls.getAttribute('color') as THREE.BufferAttribute, layout.walls.story, values, new THREE.Color(WALL_COLOUR))
-      writeColours(own.columns.getAttribute('color') as THREE.BufferAttribute, layout.columns.story, values, new THREE.Color(COLUMN_COLOUR))
-      writeColours(own.frames.getAttribute('color') as THREE.BufferAttribute, layout.frames.story, values, new THREE.Color(FRAME_COLOUR))
+      writeColours(own.walls.getAttribute('color') as THREE.BufferAttribute, layout.walls.story, values, new THREE.Color(WALL_COLOUR), layout.walls.shade)
+      writeColours(own.columns.getAttribute('color') as THREE.BufferAttribute, layout.columns.story, values, new THREE.Color(COLUMN_COLOUR), layout.columns.shade)
+      writeColours(own.frames.getAttribute('color') as THREE.BufferAttribute, layout.frames.story, values, new THREE.Color(FRAME_COLOUR), null)
       const floorValues = !m || s.colourBy === 'none' ? null : s.colourBy === 'drift' ? m.colours.driftRatio : m.colours.displacement
       own.slabMaterials.forEach((mat, i) => {
         const t = floorValues?.[i]

@@ -3,7 +3,7 @@
  * driver, camera presets with orbit controls, and a render step that can hand each finished frame to
  * an exporter. Frame loop 'demand': frames are drawn only while something moves or changes.
  */
-import { useEffect, useMemo, useRef } from 'react'
+import { useEffect, useMemo, useRef, useState } from 'react'
 import type { RefObject } from 'react'
 import { Canvas, useFrame, useThree } from '@react-three/fiber'
 import type { RootState } from '@react-three/fiber'
@@ -11,8 +11,9 @@ import * as THREE from 'three'
 import { OrbitControls } from 'three/examples/jsm/controls/OrbitControls.js'
 import { useStore } from 'zustand'
 import type { BuildingLayout } from './buildingLayout'
-import { SLAB_THICKNESS } from './buildingLayout'
+import { SLAB_THICKNESS, shadeOf } from './buildingLayout'
 import { BuildingInstance } from './BuildingInstance'
+import { isSoftwareWebGL } from './ViewerErrorBoundary'
 import type { FloorMarks, SharedResources } from './BuildingInstance'
 import type { RigidTransform } from './modeAnimation'
 import type { MotionSource } from './motionSource'
@@ -35,6 +36,7 @@ interface Props {
   readonly transformsA: RefObject<RigidTransform[]>
   /** Receives the r3f root state once created (exports drive frames with `advance`). */
   readonly rootState?: RefObject<RootState | null>
+  readonly onFrameRendered?: () => void
 }
 
 function buildShared(layout: BuildingLayout): SharedResources {
@@ -48,6 +50,12 @@ function buildShared(layout: BuildingLayout): SharedResources {
         if (hole.length >= 3) shape.holes.push(new THREE.Path(hole.map((p) => new THREE.Vector2(p.x, p.y))))
       }
       const g = new THREE.ExtrudeGeometry(shape, { depth: SLAB_THICKNESS, bevelEnabled: false })
+      const normals = g.getAttribute('normal')
+      const shade = new Float32Array(normals.count * 3)
+      for (let v = 0; v < normals.count; v++) {
+        shade.fill(shadeOf(normals.getX(v), normals.getY(v), normals.getZ(v)), 3 * v, 3 * v + 3)
+      }
+      g.setAttribute('color', new THREE.BufferAttribute(shade, 3))
       slabGeometry.set(slab.id, g)
       slabEdges.set(slab.id, new THREE.EdgesGeometry(g, 30))
     }
@@ -79,8 +87,8 @@ function buildShared(layout: BuildingLayout): SharedResources {
     ghostMaterial: new THREE.LineBasicMaterial({ color: '#5d6470', transparent: true, opacity: 0.35 }),
     cmGeometry: new THREE.SphereGeometry(0.45, 16, 10),
     crGeometry: new THREE.OctahedronGeometry(0.6),
-    cmMaterial: new THREE.MeshStandardMaterial({ color: '#6b3fa0' }),
-    crMaterial: new THREE.MeshStandardMaterial({ color: '#14806b' }),
+    cmMaterial: new THREE.MeshBasicMaterial({ color: '#6b3fa0' }),
+    crMaterial: new THREE.MeshBasicMaterial({ color: '#14806b' }),
     cmLineMaterial: new THREE.LineBasicMaterial({ color: '#6b3fa0' }),
     crLineMaterial: new THREE.LineBasicMaterial({ color: '#14806b' }),
   }
@@ -109,11 +117,13 @@ export function sideOffset(layout: BuildingLayout): number {
 
 export function ViewerCanvas(props: Props) {
   const { layout, store, rootState } = props
+  // Software rasterizers pay for every pixel: no multisampling and device pixel ratio 1 there.
+  const [software] = useState(isSoftwareWebGL)
   return (
     <Canvas
       frameloop="demand"
-      dpr={[1, 2]}
-      gl={{ antialias: true, preserveDrawingBuffer: false }}
+      dpr={software ? 1 : [1, 2]}
+      gl={{ antialias: !software, preserveDrawingBuffer: false, powerPreference: 'high-performance' }}
       camera={{ fov: 35, near: 0.5, far: 20000, position: [60, -60, 40] }}
       onCreated={(state) => {
         state.camera.up.set(0, 0, 1)
@@ -139,8 +149,6 @@ function Scene(props: Props) {
   return (
     <>
       <color attach="background" args={['#ebe8e1']} />
-      <hemisphereLight args={['#fbf8f0', '#8a8478', 1.6]} />
-      <directionalLight position={[-40, -70, 120]} intensity={1.4} />
       <ClockDriver store={store} clock={clock} onFrame={onFrame} />
       <BuildingInstance
         layout={layout}
@@ -168,7 +176,7 @@ function Scene(props: Props) {
         showCentres={showCentres}
       />
       <CameraRig layout={layout} store={store} sideBySide={sideBySide} />
-      <RenderStep capture={capture} />
+      <RenderStep capture={capture} {...(props.onFrameRendered ? { onRendered: props.onFrameRendered } : {})} />
     </>
   )
 }
@@ -195,11 +203,12 @@ function ClockDriver(props: {
   return null
 }
 
-function RenderStep(props: { capture: RefObject<FrameCapture | null> }) {
-  const { capture } = props
+function RenderStep(props: { capture: RefObject<FrameCapture | null>; onRendered?: () => void }) {
+  const { capture, onRendered } = props
   useFrame(({ gl, scene, camera }) => {
     gl.render(scene, camera)
     capture.current?.(gl.domElement)
+    onRendered?.()
   }, 1)
   return null
 }

@@ -51,6 +51,13 @@ export function ViewerUnavailable(props: { reason: string }) {
 }
 
 let webglCheck: string | null | undefined
+let softwareRenderer = false
+
+/** Whether the probe context reported a software rasterizer (SwiftShader, llvmpipe...). */
+export function isSoftwareWebGL(): boolean {
+  if (webglCheck === undefined) webglProblem()
+  return softwareRenderer
+}
 
 /** Null when this browser can create a WebGL context, else the reason in words (checked once). */
 export function webglProblem(): string | null {
@@ -61,6 +68,11 @@ export function webglProblem(): string | null {
     webglCheck = gl
       ? null
       : 'This browser could not create a WebGL context (WebGL is switched off or not supported here).'
+    if (gl) {
+      const info = gl.getExtension('WEBGL_debug_renderer_info')
+      const name = String(gl.getParameter(info ? info.UNMASKED_RENDERER_WEBGL : gl.RENDERER) ?? '')
+      softwareRenderer = /swiftshader|llvmpipe|softpipe|software/i.test(name)
+    }
     const lose = gl?.getExtension('WEBGL_lose_context')
     lose?.loseContext()
   } catch (e) {

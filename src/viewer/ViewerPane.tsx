@@ -44,6 +44,8 @@ export interface ViewerPaneProps {
   readonly isStale: boolean
   /** Initial viewer settings (tests and benchmarks); later changes are ignored. */
   readonly initial?: Partial<ViewerState>
+  /** Called after each rendered frame (benchmarks count frames with it). */
+  readonly onFrameRendered?: () => void
 }
 
 /** How many of the first modes presentation mode cycles through. */
@@ -55,7 +57,7 @@ const pct = (v: number) => `${(v * 100).toFixed(1)}`
 
 /** The 3D view of the building and its modes: canvas, controls, mode list, legend and plan trace. */
 export function ViewerPane(props: ViewerPaneProps) {
-  const { project, result, isStale, initial } = props
+  const { project, result, isStale, initial, onFrameRendered } = props
   const [store] = useState<ViewerStore>(() => createViewerStore(initial))
   const [clock] = useState<AnimationClock>(() => ({ phase: Math.PI / 2, time: 0, held: false }))
   const rootState = useRef<RootState | null>(null)
@@ -297,6 +299,7 @@ export function ViewerPane(props: ViewerPaneProps) {
               onFrame={onFrame}
               transformsA={transformsA}
               rootState={rootState}
+              {...(onFrameRendered ? { onFrameRendered } : {})}
             />
           </ViewerErrorBoundary>
         )}

@@ -33,6 +33,22 @@ export interface LayoutFloor {
   readonly corners: readonly Point[]
 }
 
+/**
+ * Baked light: brightness of a face with unit normal n under one fixed sun plus sky light, 0..1.
+ * Lighting is baked once per model revision so the frame loop needs only unlit materials, which
+ * software WebGL renders about twice as fast as lit ones.
+ */
+export function shadeOf(nx: number, ny: number, nz: number): number {
+  // Sun from the lower left of the plan, high up: L = (-0.35, -0.6, 0.72) normalized.
+  const lx = -0.35
+  const ly = -0.6
+  const lz = 0.72
+  const len = Math.hypot(lx, ly, lz)
+  const diffuse = Math.max(0, (nx * lx + ny * ly + nz * lz) / len)
+  const sky = 0.5 + 0.5 * nz
+  return Math.min(1, 0.42 + 0.4 * diffuse + 0.18 * sky)
+}
+
 /** Attached vertex data: rest positions xyz, the floor each vertex moves with, its story. */
 export interface AttachedMesh {
   readonly positions: Float32Array
@@ -42,6 +58,8 @@ export interface AttachedMesh {
   readonly attach: Int32Array
   /** Per vertex: floor index at the top of its story (for colour by story). */
   readonly story: Int32Array
+  /** Per vertex: baked light factor (see shadeOf). */
+  readonly shade: Float32Array
   /** Element id per prism, in order (24 vertices each). */
   readonly ids: readonly string[]
 }
@@ -105,6 +123,7 @@ function buildPrisms(prisms: readonly Prism[]): AttachedMesh {
   const indices = new Uint32Array(n * 36)
   const attach = new Int32Array(n * 24)
   const story = new Int32Array(n * 24)
+  const shade = new Float32Array(n * 24)
   prisms.forEach((p, k) => {
     const corners = [
       ...p.quad.map((q) => [q.x, q.y, p.z0] as const),
@@ -133,12 +152,13 @@ function buildPrisms(prisms: readonly Prism[]): AttachedMesh {
         normals.set([nx, ny, nz], v * 3)
         attach[v] = ci < 4 ? p.below : p.top
         story[v] = p.top
+        shade[v] = shadeOf(nx, ny, nz)
       })
       const base = k * 24 + f * 4
       indices.set([base, base + 1, base + 2, base, base + 2, base + 3], k * 36 + f * 6)
     })
   })
-  return { positions, normals, indices, attach, story, ids: prisms.map((p) => p.id) }
+  return { positions, normals, indices, attach, story, shade, ids: prisms.map((p) => p.id) }
 }
 
 interface Seg {

@@ -16,6 +16,7 @@ export const VIEWER_CSS = `
 .gyre-viewer-stage > div:first-child { position: absolute !important; inset: 0; }
 .gyre-viewer-banner { position: absolute; top: 6px; left: 6px; right: 6px; padding: 3px 8px;
   background: rgba(224, 138, 60, 0.92); color: #1f2630; border-radius: 3px; z-index: 2; }
+.gyre-legend, .gyre-trace, .gyre-viewer select, .gyre-viewer input { color: #1f2630; }
 .gyre-legend { position: absolute; left: 6px; bottom: 6px; background: rgba(251, 250, 246, 0.9);
   padding: 3px 6px; border-radius: 3px; z-index: 2; max-width: min(260px, 48cqw); font-size: 11px; }
 .gyre-legend-bar { height: 9px; width: 100%; min-width: 100px; border-radius: 2px; }
@@ -52,7 +53,8 @@ export const VIEWER_CSS = `
   font-size: 18px; background: #181e29; color: #f7f3e8; }
 .gyre-viewer--presenting .gyre-modes, .gyre-viewer--presenting .gyre-viewer-bar--main { display: none; }
 .gyre-viewer--presenting .gyre-caption { display: block; }
-.gyre-caption h2 { font-size: 34px; margin: 0 0 2px; font-weight: 650; }
+.gyre-caption h2 { font-size: 34px; margin: 0 0 2px; font-weight: 650; text-transform: none;
+  letter-spacing: normal; color: #f7f3e8; }
 .gyre-caption p { font-size: 22px; margin: 0; color: #e9dfc4; }
 .gyre-caption p + p { font-size: 16px; color: #b9c3cf; }
 .gyre-viewer--presenting .gyre-viewer-stage { border-color: #2b3a55; }

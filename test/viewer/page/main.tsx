@@ -14,6 +14,7 @@ import { fixtureResult, threeFloorProject } from '../fixtures'
 declare global {
   interface Window {
     __viewerPage?: { source: 'engine' | 'fixture'; floors: number; note: string }
+    __viewerFrames?: number
   }
 }
 
@@ -48,7 +49,15 @@ async function main() {
   const root = document.getElementById('root')
   if (root) {
     createRoot(root).render(
-      <ViewerPane project={project} result={result} isStale={false} initial={{ playing: params.get('play') !== '0' }} />,
+      <ViewerPane
+        project={project}
+        result={result}
+        isStale={false}
+        initial={{ playing: params.get('play') !== '0' }}
+        onFrameRendered={() => {
+          window.__viewerFrames = (window.__viewerFrames ?? 0) + 1
+        }}
+      />,
     )
   }
 }
