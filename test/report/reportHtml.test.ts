@@ -1,6 +1,8 @@
+import { readFileSync } from 'node:fs'
 import { describe, expect, it } from 'vitest'
+import { analyzeProject } from '@/engine'
 import type { BalanceResult } from '@/engine'
-import { CAUTION, CAUTION_SHORT } from '@/model'
+import { CAUTION, CAUTION_SHORT, parseProjectText } from '@/model'
 import { buildReportHtml, cssString, escapeHtml, formatTimestamp } from '@/report'
 import { demoCase } from './fixtures'
 
@@ -172,5 +174,19 @@ describe('formatTimestamp', () => {
   it('prints UTC minutes', () => {
     expect(formatTimestamp(AT)).toBe('2026-12-02 04:00 UTC')
     expect(formatTimestamp(new Date(Number.NaN))).toBe('unknown time')
+  })
+})
+
+describe('buildReportHtml on a mechanism', () => {
+  it('still builds, lists the mechanism issue and keeps the caution', () => {
+    const text = readFileSync(new URL('../../public/examples/mechanism-x.json', import.meta.url), 'utf8')
+    const parsed = parseProjectText(text)
+    if (!parsed.ok) throw new Error(parsed.errors.join('; '))
+    const result = analyzeProject(parsed.project)
+    expect(result.status).toBe('mechanism')
+    const html = buildReportHtml(parsed.project, result, { unitSystem: 'US', generatedAt: AT })
+    expect(sectionText(html, 'issues')).toContain('mechanism')
+    expect(html).not.toContain('data-table="torsion"')
+    expect(html.split(CAUTION).length - 1).toBeGreaterThanOrEqual(3)
   })
 })
