@@ -3,7 +3,7 @@
  * live centre overlays, the 3D view beside it, problems and results below, inspector on the right,
  * and a status line. Every panel sits in its own error boundary.
  */
-import { useCallback, useEffect, useMemo, useRef, useState } from 'react'
+import { memo, useCallback, useEffect, useMemo, useRef, useState } from 'react'
 import type { ChangeEvent } from 'react'
 import {
   dispatch,
@@ -28,7 +28,7 @@ import { ViewerPane } from '@/viewer'
 import type { ViewerPaneProps } from '@/viewer'
 import { ACTIONS, actionForKey } from './actions'
 import type { Action, ActionContext } from './actions'
-import type { AnalysisClient } from './analysisClient'
+import type { AnalysisClient, AnalysisState } from './analysisClient'
 import { createAutosaver } from './autosave'
 import { blankProject } from './blankProject'
 import { ErrorBoundary } from './ErrorBoundary'
@@ -64,6 +64,9 @@ interface Banner {
 }
 
 const UNITS_KEY = 'gyre.units'
+const MemoViewerPane = memo(ViewerPane)
+const MemoResultsPanel = memo(ResultsPanel)
+const MemoFloorStack = memo(FloorStack)
 const PICK_PIXELS = 8
 const DRAWING_TOOLS = new Set(['wall', 'frame', 'slab', 'opening', 'mass-line'])
 
@@ -255,20 +258,27 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
     [store],
   )
 
-  const run = (label: string, fn: () => { ok: boolean; message?: string }): string | null => {
-    mark(store, label)
-    const r = fn()
-    return r.ok ? null : (r.message ?? 'refused')
-  }
-  const floorActions: FloorActions = {
-    add: () => run('add floor', () => execute(store, 'addFloor', {})),
-    remove: (floor) => run('remove floor', () => execute(store, 'removeFloor', { floor })),
-    duplicate: (floor) => run('duplicate floor', () => execute(store, 'duplicateFloor', { floor })),
-    rename: (floor, name) => run('rename floor', () => execute(store, 'renameFloor', { floor, name })),
-    setHeight: (floor, height) => run('story height', () => execute(store, 'setFloorHeight', { floor, height })),
-    link: (floor, source) => run('typical floor', () => execute(store, 'linkTypicalFloor', { floor, source })),
-    unlink: (floor) => run('break typical link', () => execute(store, 'unlinkTypicalFloor', { floor })),
-  }
+  const run = useCallback(
+    (label: string, fn: () => { ok: boolean; message?: string }): string | null => {
+      mark(store, label)
+      const r = fn()
+      return r.ok ? null : (r.message ?? 'refused')
+    },
+    [store],
+  )
+  const floorActions: FloorActions = useMemo(
+    () => ({
+      add: () => run('add floor', () => execute(store, 'addFloor', {})),
+      remove: (floor) => run('remove floor', () => execute(store, 'removeFloor', { floor })),
+      duplicate: (floor) => run('duplicate floor', () => execute(store, 'duplicateFloor', { floor })),
+      rename: (floor, name) => run('rename floor', () => execute(store, 'renameFloor', { floor, name })),
+      setHeight: (floor, height) => run('story height', () => execute(store, 'setFloorHeight', { floor, height })),
+      link: (floor, source) => run('typical floor', () => execute(store, 'linkTypicalFloor', { floor, source })),
+      unlink: (floor) => run('break typical link', () => execute(store, 'unlinkTypicalFloor', { floor })),
+    }),
+    [run, store],
+  )
+  const onSelectFloor = useCallback((f: FloorId) => setCurrentFloor(store, f), [store])
   const onReplace = (_kind: InspectedKind, record: { readonly id: string }): string | null => {
     const { id, ...patch } = record
     return run('edit property', () => execute(store, 'updateElement', { id, patch: patch as never }))
@@ -316,6 +326,15 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
     dispatch(store, parsed.event)
     setNumericText('')
   }
+
+  // The 3D view follows the model between gestures: during a drag it keeps the state from the
+  // gesture's start (marked stale), so rebuilding 3D geometry never competes with the pointer.
+  const gestureActive = tool.state !== 'idle'
+  const viewerFrozen = useRef<{ doc: Project; result: AnalysisState['result'] }>({ doc, result: state.result })
+  if (!gestureActive) viewerFrozen.current = { doc, result: state.result }
+  const viewerDoc = viewerFrozen.current.doc
+  const viewerResult = viewerFrozen.current.result
+  const viewerStale = gestureActive || state.isStale || state.error !== null
 
   const floor = doc.floors.find((f) => f.id === floorId)
   const floorNumber = doc.floors.findIndex((f) => f.id === floorId) + 1
@@ -396,7 +415,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
       <div className="workspace">
         <aside className="side">
           <ErrorBoundary name="Floors">
-            <FloorStack project={doc} current={floorId} units={units} onSelect={(f) => setCurrentFloor(store, f)} actions={floorActions} />
+            <MemoFloorStack floors={doc.floors} current={floorId} units={units} onSelect={onSelectFloor} actions={floorActions} />
           </ErrorBoundary>
         </aside>
         <main className="center">
@@ -456,10 +475,10 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
             </ErrorBoundary>
             <div className="viewer-slot">
               <ErrorBoundary name="3D view">
-                <ViewerPane
-                  project={doc}
-                  result={state.result}
-                  isStale={state.isStale || state.error !== null}
+                <MemoViewerPane
+                  project={viewerDoc}
+                  result={viewerResult}
+                  isStale={viewerStale}
                   {...(viewerInitial ? { initial: viewerInitial } : {})}
                 />
               </ErrorBoundary>
@@ -470,7 +489,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
               <ProblemsPanel issues={issues} analysisError={state.error} notices={message ? [message] : []} onPick={onPickIssue} />
             </ErrorBoundary>
             <ErrorBoundary name="Results">
-              <ResultsPanel project={doc} result={state.result} isStale={state.isStale} units={units} />
+              <MemoResultsPanel floors={doc.floors} result={state.result} isStale={state.isStale} units={units} />
             </ErrorBoundary>
           </div>
         </main>

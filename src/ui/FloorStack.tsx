@@ -1,7 +1,7 @@
 /** The floor stack: name, elevation and story height of every floor, top first; edit the current one. */
 import { useState } from 'react'
 import { computeElevations } from '@/model'
-import type { FloorId, Project, UnitSystem } from '@/model'
+import type { Floor, FloorId, UnitSystem } from '@/model'
 import { NumberField } from './NumberField'
 import { formatQuantity } from './quantities'
 
@@ -17,14 +17,15 @@ export interface FloorActions {
 }
 
 interface Props {
-  readonly project: Project
+  readonly floors: readonly Floor[]
   readonly current: FloorId | null
   readonly units: UnitSystem
   readonly onSelect: (floor: FloorId) => void
   readonly actions: FloorActions
 }
 
-export function FloorStack({ project, current, units, onSelect, actions }: Props) {
+export function FloorStack({ floors, current, units, onSelect, actions }: Props) {
+  const project = { floors }
   const [message, setMessage] = useState<string | null>(null)
   const z = computeElevations(project)
   const floor = project.floors.find((f) => f.id === current) ?? null

@@ -1,10 +1,10 @@
 import { CAUTION } from '@/model'
-import type { Project, UnitSystem } from '@/model'
+import type { Floor, UnitSystem } from '@/model'
 import type { AnalysisResult, ModeCharacter } from '@/engine'
 import { formatNumber, formatQuantity } from './quantities'
 
 interface Props {
-  readonly project: Project
+  readonly floors: readonly Floor[]
   readonly result: AnalysisResult | null
   readonly isStale: boolean
   readonly units: UnitSystem
@@ -20,8 +20,8 @@ const CHARACTER: Record<ModeCharacter, string> = {
 const pct = (v: number | undefined): string => (v === undefined || !Number.isFinite(v) ? '—' : `${(v * 100).toFixed(1)}%`)
 
 /** Modes table and torsion check table of the latest analysis, with the full caution. */
-export function ResultsPanel({ project, result, isStale, units }: Props) {
-  const floorName = (id: string): string => project.floors.find((f) => f.id === id)?.name ?? id
+export function ResultsPanel({ floors, result, isStale, units }: Props) {
+  const floorName = (id: string): string => floors.find((f) => f.id === id)?.name ?? id
   const modes = result?.modes ?? null
   const modeCount = modes ? Math.min(modes.count, 12) : 0
   const criterion = result?.torsion?.criterion ?? null
