@@ -1,5 +1,5 @@
 /**
- * Node entry: `npm run analyze -- [model.json] [--json] [--time-history] [--criteria <id>] [--units SI|US]`.
+ * Node entry: `npm run analyze -- [model.json] [--json] [--time-history] [--criteria <id>] [--units SI|US] [--balance]`.
  * Reads a project file, validates it, runs the engine and prints a summary (or the full JSON result).
  * Exit codes: 0 analysis completed, 1 invalid model or arguments, 2 mechanism, 3 internal error.
  * Imports only model and engine: the living proof that both run without a browser.
@@ -8,11 +8,11 @@
 import { readFileSync } from 'node:fs'
 import { resolve } from 'node:path'
 import { fileURLToPath } from 'node:url'
-import { analyzeProject } from '@/engine'
+import { analyzeProject, suggestBalance } from '@/engine'
 import type { AnalysisOptions } from '@/engine'
 import { CAUTION, parseProjectText } from '@/model'
 import { USAGE, parseArgs } from './args'
-import { formatIssue, formatResultJson, formatSummary } from './format'
+import { formatBalance, formatIssue, formatResultJson, formatSummary } from './format'
 
 /** Where the CLI writes and how it reads files (injected so tests run in-process). */
 export interface CliIo {
@@ -76,7 +76,14 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
   }
 
   try {
-    io.out(o.json ? formatResultJson(result) : formatSummary(result, o.units))
+    const balance = o.balance && result.status === 'ok' ? suggestBalance(parsed.project) : null
+    if (o.json) {
+      // The balance suggestions ride along as one extra top-level field (docs/results-format.md).
+      io.out(formatResultJson(balance ? { ...result, balance } : result))
+    } else {
+      io.out(formatSummary(result, o.units))
+      if (balance) io.out(`\n${formatBalance(balance)}`)
+    }
   } catch (error) {
     io.err(`[cli] internal error while printing the result: ${(error as Error).message}\n`)
     return EXIT_INTERNAL

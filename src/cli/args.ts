@@ -9,6 +9,8 @@ export interface CliOptions {
   readonly criteria: string | null
   readonly units: UnitSystem
   readonly help: boolean
+  /** Also run the balance assistant and print its ranked suggestions. */
+  readonly balance: boolean
 }
 
 export type ArgsResult = { readonly ok: true; readonly options: CliOptions } | { readonly ok: false; readonly error: string }
@@ -23,6 +25,7 @@ options:
   --time-history       also run the time history (slower)
   --criteria <id>      criterion set to check against (overrides the project's setting)
   --units SI|US        display units of the tables (default SI; --json is always SI)
+  --balance            also ask the balance assistant which element to move, lengthen or thicken
   -h, --help           show this text
 
 exit codes: 0 analysis completed, 1 invalid model or arguments, 2 mechanism, 3 internal error`
@@ -35,6 +38,7 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
   let criteria: string | null = null
   let units: UnitSystem = 'SI'
   let help = false
+  let balance = false
   for (let i = 0; i < argv.length; i++) {
     const arg = argv[i] as string
     const [name, inline] = arg.startsWith('--') && arg.includes('=') ? arg.split(/=(.*)/s, 2) : [arg, undefined]
@@ -51,6 +55,9 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
         break
       case '--time-history':
         timeHistory = true
+        break
+      case '--balance':
+        balance = true
         break
       case '--criteria': {
         const v = value()
@@ -76,5 +83,5 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
         file = arg
     }
   }
-  return { ok: true, options: { file, json, timeHistory, criteria, units, help } }
+  return { ok: true, options: { file, json, timeHistory, criteria, units, help, balance } }
 }

@@ -4,6 +4,7 @@
  */
 import type {
   AnalysisResult,
+  BalanceResult,
   CheckRow,
   CriterionEvaluation,
   Issue,
@@ -362,10 +363,48 @@ const JSON_LEAD = [
 ] as const
 
 /** The full AnalysisResult as 2-space JSON (SI units; see docs/results-format.md). */
-export function formatResultJson(result: AnalysisResult): string {
+export function formatResultJson(result: AnalysisResult & { readonly balance?: BalanceResult }): string {
   const rest = Object.fromEntries(
     Object.entries(result).filter(([k]) => !(JSON_LEAD as readonly string[]).includes(k)),
   )
   const ordered = { ...Object.fromEntries(JSON_LEAD.map((k) => [k, result[k]])), ...rest }
   return `${JSON.stringify(ordered, jsonReplacer, 2)}\n`
+}
+
+/** The balance assistant's suggestions as a table, with the caution. */
+export function formatBalance(balance: BalanceResult): string {
+  const lines: string[] = []
+  lines.push(
+    `Balance assistant (score = RMS over floors of e/r; 0 = centres coincide; see docs/balance.md)`,
+  )
+  lines.push(
+    `  current score ${balance.score.toFixed(3)}, worst |e|/r ${balance.worstEccentricityRatio.toFixed(3)}; ${balance.trials} trial analyses`,
+  )
+  if (balance.suggestions.length === 0) {
+    lines.push(`  ${balance.message ?? 'no suggestion'}`)
+  } else {
+    const rows = balance.suggestions.map((s, i) => [
+      String(i + 1),
+      s.description,
+      s.scoreAfter.toFixed(3),
+      s.worstEccentricityRatioAfter.toFixed(3),
+      s.worstDriftRatioBefore === null ? '-' : s.worstDriftRatioBefore.toFixed(3),
+      s.worstDriftRatioAfter === null ? '-' : s.worstDriftRatioAfter.toFixed(3),
+    ])
+    lines.push(
+      formatTable(
+        [
+          { header: '#', align: 'right' },
+          { header: 'change (one at a time)', align: 'left' },
+          { header: 'score after', align: 'right' },
+          { header: 'worst e/r after', align: 'right' },
+          { header: 'drift ratio before', align: 'right' },
+          { header: 'after', align: 'right' },
+        ],
+        rows,
+      ),
+    )
+  }
+  lines.push(`CAUTION: ${balance.caution}`)
+  return `${lines.join('\n')}\n`
 }

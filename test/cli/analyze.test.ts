@@ -208,3 +208,22 @@ describe('docs/results-format.md', () => {
     expect(missing).toEqual([])
   })
 })
+
+describe('runCli --balance', () => {
+  it('prints ranked suggestions for the eccentric box, with the caution after them', () => {
+    const { code, out } = run(['public/examples/eccentric-box.json', '--balance'])
+    expect(code).toBe(EXIT_OK)
+    const at = out.indexOf('Balance assistant')
+    expect(at).toBeGreaterThan(0)
+    expect(out.slice(at)).toContain(CAUTION)
+    expect(out.slice(at)).toMatch(/1 {2}(Move|Stiffen|Lengthen|Thicken|Thin|Soften) /)
+  })
+
+  it('adds a balance field to --json output', () => {
+    const { code, out } = run(['public/examples/eccentric-box.json', '--balance', '--json'])
+    expect(code).toBe(EXIT_OK)
+    const parsed = JSON.parse(out) as { balance: { suggestions: { scoreAfter: number }[]; score: number } }
+    expect(parsed.balance.suggestions.length).toBeGreaterThan(0)
+    expect(parsed.balance.suggestions[0]!.scoreAfter).toBeLessThan(parsed.balance.score)
+  })
+})
