@@ -1,16 +1,17 @@
 /**
- * Node entry: `npm run analyze -- [model.json] [--json] [--time-history] [--criteria <id>] [--units SI|US] [--balance]`.
+ * Node entry: `npm run analyze -- [model.json] [--json] [--time-history] [--criteria <id>] [--units SI|US] [--balance] [--report file.html] [--csv folder]`.
  * Reads a project file, validates it, runs the engine and prints a summary (or the full JSON result).
  * Exit codes: 0 analysis completed, 1 invalid model or arguments, 2 mechanism, 3 internal error.
  * Imports only model and engine: the living proof that both run without a browser.
  * @see ../../docs/cli.md
  */
-import { readFileSync } from 'node:fs'
-import { resolve } from 'node:path'
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs'
+import { dirname, join, resolve } from 'node:path'
 import { fileURLToPath } from 'node:url'
 import { analyzeProject, suggestBalance } from '@/engine'
 import type { AnalysisOptions } from '@/engine'
 import { CAUTION, parseProjectText } from '@/model'
+import { buildReportHtml, buildResultTables, csvFileName, toCsv } from '@/report'
 import { USAGE, parseArgs } from './args'
 import { formatBalance, formatIssue, formatResultJson, formatSummary } from './format'
 
@@ -19,6 +20,8 @@ export interface CliIo {
   readonly out: (text: string) => void
   readonly err: (text: string) => void
   readonly readFile: (path: string) => string
+  /** Write a text file, creating its folder (used by --report and --csv). */
+  readonly writeFile: (path: string, text: string) => void
 }
 
 export const EXIT_OK = 0
@@ -33,6 +36,10 @@ const nodeIo: CliIo = {
   out: (text) => process.stdout.write(text),
   err: (text) => process.stderr.write(text),
   readFile: (path) => readFileSync(path, 'utf8'),
+  writeFile: (path, text) => {
+    mkdirSync(dirname(path), { recursive: true })
+    writeFileSync(path, text, 'utf8')
+  },
 }
 
 /** Run the CLI on argv (without node and the script) and return the exit code. Never throws. */
@@ -83,6 +90,20 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
     } else {
       io.out(formatSummary(result, o.units))
       if (balance) io.out(`\n${formatBalance(balance)}`)
+    }
+    if (o.report !== null) {
+      const html = buildReportHtml(parsed.project, result, {
+        unitSystem: o.units,
+        generatedAt: new Date(),
+        ...(balance ? { balance } : {}),
+      })
+      io.writeFile(o.report, html)
+      io.err(`[cli] report written to ${o.report}\n`)
+    }
+    if (o.csv !== null) {
+      const tables = buildResultTables(parsed.project, result, o.units)
+      for (const t of tables) io.writeFile(join(o.csv, csvFileName(parsed.project, t)), toCsv(t, parsed.project))
+      io.err(`[cli] ${tables.length} CSV tables written to ${o.csv}\n`)
     }
   } catch (error) {
     io.err(`[cli] internal error while printing the result: ${(error as Error).message}\n`)

@@ -11,6 +11,10 @@ export interface CliOptions {
   readonly help: boolean
   /** Also run the balance assistant and print its ranked suggestions. */
   readonly balance: boolean
+  /** Write the printable HTML report to this path. */
+  readonly report: string | null
+  /** Write every result table as CSV into this folder. */
+  readonly csv: string | null
 }
 
 export type ArgsResult = { readonly ok: true; readonly options: CliOptions } | { readonly ok: false; readonly error: string }
@@ -26,6 +30,8 @@ options:
   --criteria <id>      criterion set to check against (overrides the project's setting)
   --units SI|US        display units of the tables (default SI; --json is always SI)
   --balance            also ask the balance assistant which element to move, lengthen or thicken
+  --report <file>      also write the printable HTML report (open it in a browser and print)
+  --csv <folder>       also write every result table as a CSV file into the folder
   -h, --help           show this text
 
 exit codes: 0 analysis completed, 1 invalid model or arguments, 2 mechanism, 3 internal error`
@@ -39,6 +45,8 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
   let units: UnitSystem = 'SI'
   let help = false
   let balance = false
+  let report: string | null = null
+  let csv: string | null = null
   for (let i = 0; i < argv.length; i++) {
     const arg = argv[i] as string
     const [name, inline] = arg.startsWith('--') && arg.includes('=') ? arg.split(/=(.*)/s, 2) : [arg, undefined]
@@ -59,6 +67,18 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
       case '--balance':
         balance = true
         break
+      case '--report': {
+        const v = value()
+        if (!v) return { ok: false, error: '[cli] --report needs a file name, e.g. --report report.html' }
+        report = v
+        break
+      }
+      case '--csv': {
+        const v = value()
+        if (!v) return { ok: false, error: '[cli] --csv needs a folder, e.g. --csv tables' }
+        csv = v
+        break
+      }
       case '--criteria': {
         const v = value()
         if (!v) return { ok: false, error: '[cli] --criteria needs a criterion set id, e.g. --criteria asce7-16' }
@@ -83,5 +103,5 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
         file = arg
     }
   }
-  return { ok: true, options: { file, json, timeHistory, criteria, units, help, balance } }
+  return { ok: true, options: { file, json, timeHistory, criteria, units, help, balance, report, csv } }
 }

@@ -10,16 +10,23 @@ const root = fileURLToPath(new URL('../../', import.meta.url))
 const example = (name: string): string => `${root}public/examples/${name}`
 
 /** In-process run with captured output; files come from disk unless `files` has them. */
-function run(argv: string[], files: Record<string, string> = {}): { code: number; out: string; err: string } {
+function run(
+  argv: string[],
+  files: Record<string, string> = {},
+): { code: number; out: string; err: string; written: Record<string, string> } {
   let out = ''
   let err = ''
+  const written: Record<string, string> = {}
   const io: CliIo = {
     out: (t) => (out += t),
     err: (t) => (err += t),
     readFile: (p) => files[p] ?? readFileSync(p, 'utf8'),
+    writeFile: (p, text) => {
+      written[p] = text
+    },
   }
   const code = runCli(argv, io)
-  return { code, out, err }
+  return { code, out, err, written }
 }
 
 const boxText = readFileSync(example('eccentric-box.json'), 'utf8')
@@ -225,5 +232,19 @@ describe('runCli --balance', () => {
     const parsed = JSON.parse(out) as { balance: { suggestions: { scoreAfter: number }[]; score: number } }
     expect(parsed.balance.suggestions.length).toBeGreaterThan(0)
     expect(parsed.balance.suggestions[0]!.scoreAfter).toBeLessThan(parsed.balance.score)
+  })
+})
+
+describe('runCli --report and --csv', () => {
+  it('writes the printable report with the caution and one CSV per table', () => {
+    const r = run(['public/examples/eccentric-box.json', '--report', 'out/box.html', '--csv', 'out/tables'])
+    expect(r.code).toBe(EXIT_OK)
+    const html = r.written['out/box.html']
+    expect(html).toMatch(/^<!doctype html>/)
+    expect(html).toContain(CAUTION)
+    const csvs = Object.keys(r.written).filter((k) => k.startsWith('out/tables/') && k.endsWith('.csv'))
+    expect(csvs.length).toBeGreaterThanOrEqual(3)
+    for (const k of csvs) expect(r.written[k]!.split('\r\n')[0]).toContain(CAUTION)
+    expect(r.err).toContain('report written to out/box.html')
   })
 })

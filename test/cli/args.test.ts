@@ -5,14 +5,14 @@ describe('parseArgs', () => {
   it('gives the defaults when no argument is passed', () => {
     expect(parseArgs([])).toEqual({
       ok: true,
-      options: { file: null, json: false, timeHistory: false, criteria: null, units: 'SI', help: false, balance: false },
+      options: { file: null, json: false, timeHistory: false, criteria: null, units: 'SI', help: false, balance: false, report: null, csv: null },
     })
   })
 
   it('reads the file and every option, in any order, with spaces or =', () => {
     expect(parseArgs(['--units', 'US', 'm.json', '--json', '--criteria=en1998-1', '--time-history', '--balance'])).toEqual({
       ok: true,
-      options: { file: 'm.json', json: true, timeHistory: true, criteria: 'en1998-1', units: 'US', help: false, balance: true },
+      options: { file: 'm.json', json: true, timeHistory: true, criteria: 'en1998-1', units: 'US', help: false, balance: true, report: null, csv: null },
     })
   })
 
