@@ -9,6 +9,7 @@ import type { Page } from 'playwright-core'
 import { CAUTION } from '@/model'
 import { contentShare, decodePng, differenceShare, hasPngSignature } from '../viewer/pngDecode'
 import type { DecodedPng } from '../viewer/pngDecode'
+import { startViewerPage } from '../viewer/pageServer'
 import { startBrowserSession } from './harness'
 import type { BrowserSession } from './harness'
 
@@ -160,5 +161,28 @@ describe('3D view', () => {
     expect(await page.locator(CANVAS).count()).toBe(0)
     expect(errors.filter((e) => /pageerror|Uncaught/i.test(e))).toEqual([])
     await context.close()
+  })
+})
+
+describe('3D view of a time history (viewer test page, engine results)', () => {
+  it('plays the response: the source switch appears and two frames differ', async () => {
+    const viewer = await startViewerPage()
+    try {
+      const context = await viewer.browser.newContext({ viewport: { width: 1000, height: 760 } })
+      const page = await context.newPage()
+      await page.goto(viewer.url('model=demo&engine=1&th=1'))
+      await page.waitForSelector('[data-testid=viewer-source]', { timeout: 90000 })
+      expect(await page.evaluate(() => window.__viewerPage?.source)).toBe('engine')
+      await page.selectOption('[data-testid=viewer-source]', 'history')
+      await page.waitForTimeout(400)
+      const a = await shot(page)
+      await page.waitForTimeout(500)
+      const b = await shot(page)
+      expect(differenceShare(a, b)).toBeGreaterThan(0.001)
+      expect(await page.textContent('[data-testid=viewer-legend]')).toContain('at the peak')
+      await context.close()
+    } finally {
+      await viewer.close()
+    }
   })
 })

@@ -1,7 +1,8 @@
 /**
  * Test page for the 3D viewer alone (browser tests and the frame-rate benchmark), served by Vite's
  * dev server at /test/viewer/page/index.html. Query: model=three|demo|gen, floors=N (gen),
- * engine=1 to analyse with the engine (falls back to the hand-made fixture if it cannot).
+ * engine=1 to analyse with the engine (falls back to the hand-made fixture if it cannot), th=1 to
+ * include the time history, play=0 to start paused.
  */
 import { createRoot } from 'react-dom/client'
 import { analyzeProject } from '@/engine'
@@ -36,7 +37,7 @@ async function main() {
   let note = ''
   if (params.get('engine') === '1') {
     try {
-      const r = analyzeProject(project)
+      const r = analyzeProject(project, { timeHistory: params.get('th') === '1' })
       if (r.modes && r.modes.count > 0) {
         result = r
         source = 'engine'
