@@ -70,6 +70,7 @@ export function ViewerPane(props: ViewerPaneProps) {
   const state = useStore(store)
   const layout = useMemo(() => layoutBuilding(project), [project])
   const walls = useMemo(() => wallSegments(Object.values(project.walls)), [project.walls])
+  const floorNames = useMemo(() => layout.floors.map((f) => f.name), [layout])
   const fits = resultFits(result, layout)
   const modes = fits ? (result?.modes ?? null) : null
   const rows = useMemo(() => (modes ? modeRows(modes) : []), [modes])
@@ -275,6 +276,7 @@ export function ViewerPane(props: ViewerPaneProps) {
         store={store}
         state={state}
         hasHistory={Boolean(history)}
+        floorNames={floorNames}
         onStep={step}
         onPeak={peak}
         onPng={exportPng}
@@ -377,12 +379,13 @@ function Toolbar(props: {
   store: ViewerStore
   state: ViewerState
   hasHistory: boolean
+  floorNames: readonly string[]
   onStep: () => void
   onPeak: () => void
   onPng: () => void
   onWebm: () => void
 }) {
-  const { store, state, hasHistory, onStep, onPeak, onPng, onWebm } = props
+  const { store, state, hasHistory, floorNames, onStep, onPeak, onPng, onWebm } = props
   const cam = (preset: CameraPreset, label: string, id: string) => (
     <button type="button" data-testid={`viewer-camera-${id}`} onClick={() => requestCamera(store, preset)}>
       {label}
@@ -447,6 +450,22 @@ function Toolbar(props: {
               <option value="none">plain</option>
             </select>
           </label>
+          {state.showTrace && floorNames.length > 1 && (
+            <label>
+              Paths of
+              <select
+                data-testid="viewer-trace-floor"
+                value={state.traceFloor ?? floorNames.length - 1}
+                onChange={(e) => setViewer(store, { traceFloor: Number(e.target.value) })}
+              >
+                {floorNames.map((name, i) => (
+                  <option key={i} value={i}>
+                    {name}
+                  </option>
+                ))}
+              </select>
+            </label>
+          )}
           {hasHistory && (
             <label>
               Motion

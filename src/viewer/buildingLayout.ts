@@ -6,7 +6,6 @@
  */
 import { computeElevations, elementFloorRange, floorContent } from '@/model'
 import type { Point, Project } from '@/model'
-import { applyTransform } from './modeAnimation'
 import type { RigidTransform } from './modeAnimation'
 
 /** Visual slab thickness, m (the model has none: slabs are rigid diaphragms with an area mass). */
@@ -297,14 +296,14 @@ export function writeAttachedPositions(
   transforms: readonly RigidTransform[],
   out: Float32Array,
 ): void {
+  // Hot loop (every frame, every member vertex): inlined transform, no allocation.
   for (let v = 0; v < attach.length; v++) {
     const tr = transforms[attach[v]!]
     const x = rest[3 * v]!
     const y = rest[3 * v + 1]!
     if (tr) {
-      const p = applyTransform(tr, x, y)
-      out[3 * v] = p.x
-      out[3 * v + 1] = p.y
+      out[3 * v] = tr.cos * x - tr.sin * y + tr.tx
+      out[3 * v + 1] = tr.sin * x + tr.cos * y + tr.ty
     } else {
       out[3 * v] = x
       out[3 * v + 1] = y
