@@ -327,8 +327,9 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
     setNumericText('')
   }
 
-  // The 3D view follows the model between gestures: during a drag it keeps the state from the
-  // gesture's start (marked stale), so rebuilding 3D geometry never competes with the pointer.
+  // The 3D view and the result tables follow the model between gestures: during a drag they keep the
+  // state from the gesture's start (marked stale), so rebuilding them never competes with the pointer;
+  // the plan overlays alone follow the drag live.
   const gestureActive = tool.state !== 'idle'
   const viewerFrozen = useRef<{ doc: Project; result: AnalysisState['result'] }>({ doc, result: state.result })
   if (!gestureActive) viewerFrozen.current = { doc, result: state.result }
@@ -489,7 +490,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
               <ProblemsPanel issues={issues} analysisError={state.error} notices={message ? [message] : []} onPick={onPickIssue} />
             </ErrorBoundary>
             <ErrorBoundary name="Results">
-              <MemoResultsPanel floors={doc.floors} result={state.result} isStale={state.isStale} units={units} />
+              <MemoResultsPanel floors={doc.floors} result={viewerResult} isStale={viewerStale} units={units} />
             </ErrorBoundary>
           </div>
         </main>
