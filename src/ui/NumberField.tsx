@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react'
+import { useState } from 'react'
 import type { UnitSystem } from '@/model'
 import { formatNumber, parseDisplayInput, unitSymbol } from './quantities'
 import type { FieldRule, QuantityKind } from './quantities'
@@ -24,10 +24,13 @@ export function NumberField({ label, value, kind, units, rule, testId, onCommit,
   const shown = formatNumber(value, kind, units)
   const [text, setText] = useState(shown)
   const [error, setError] = useState<string | null>(null)
-  useEffect(() => {
+  // A new model value or unit resets the box during render (no stale frame in between).
+  const [prevShown, setPrevShown] = useState(shown)
+  if (prevShown !== shown) {
+    setPrevShown(shown)
     setText(shown)
     setError(null)
-  }, [shown])
+  }
 
   const commit = (): void => {
     if (text === shown) {
