@@ -23,8 +23,10 @@ import {
 import type { Draft, EditorStore } from '@/editor'
 import type { Issue } from '@/engine'
 import { demoProject } from '@/model'
-import type { BaseRef, FloorId, Project, UnitSystem } from '@/model'
+import type { BaseRef, FloorId, FrameLine, Project, UnitSystem, Wall } from '@/model'
 import { ViewerPane } from '@/viewer'
+import { BalancePanel, ReportActions } from './extras'
+import './extras/extras.css'
 import type { ViewerPaneProps } from '@/viewer'
 import { ACTIONS, actionForKey } from './actions'
 import type { Action, ActionContext } from './actions'
@@ -283,6 +285,14 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
     const { id, ...patch } = record
     return run('edit property', () => execute(store, 'updateElement', { id, patch: patch as never }))
   }
+  const onApplyBalance = useCallback(
+    (element: Wall | FrameLine): void => {
+      const { id, ...patch } = element
+      const refused = run('apply balance change', () => execute(store, 'updateElement', { id, patch: patch as never }))
+      if (refused === null) setSelection(store, [id])
+    },
+    [run, store],
+  )
   const onCopyToFloors = (base: BaseRef, top: FloorId, move: boolean): string | null => {
     const ids = store.getState().selection
     return move
@@ -508,6 +518,12 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
               onCopyToFloors={onCopyToFloors}
               copyMessage={null}
             />
+          </ErrorBoundary>
+          <ErrorBoundary name="Balance">
+            <BalancePanel project={doc} onApply={onApplyBalance} />
+          </ErrorBoundary>
+          <ErrorBoundary name="Report">
+            <ReportActions project={doc} result={viewerResult} unitSystem={units} />
           </ErrorBoundary>
         </aside>
       </div>

@@ -1,6 +1,7 @@
 import { CAUTION } from '@/model'
 import type { Floor, UnitSystem } from '@/model'
-import type { AnalysisResult, ModeCharacter } from '@/engine'
+import type { AnalysisResult } from '@/engine'
+import { characterWords } from '@/viewer'
 import { formatNumber, formatQuantity } from './quantities'
 
 interface Props {
@@ -10,12 +11,6 @@ interface Props {
   readonly units: UnitSystem
 }
 
-const CHARACTER: Record<ModeCharacter, string> = {
-  x: 'X translation',
-  y: 'Y translation',
-  torsion: 'torsion',
-  coupled: 'coupled',
-}
 
 const pct = (v: number | undefined): string => (v === undefined || !Number.isFinite(v) ? '—' : `${(v * 100).toFixed(1)}%`)
 
@@ -67,7 +62,7 @@ export function ResultsPanel({ floors, result, isStale, units }: Props) {
                 <td>{pct(modes.effectiveMassRatio.rz[i])}</td>
                 <td>{pct(modes.cumulativeMassRatio.x[i])}</td>
                 <td>{pct(modes.cumulativeMassRatio.y[i])}</td>
-                <td>{CHARACTER[modes.character[i] ?? 'coupled']}</td>
+                <td>{characterWords(modes.character[i] ?? 'coupled')}</td>
               </tr>
             ))}
           </tbody>

@@ -3,4 +3,5 @@
  * Public API: ViewerPane. Must not import: ui.
  */
 export { ViewerPane } from './ViewerPane'
+export { characterWords } from './modeMeaning'
 export type { ViewerPaneProps } from './ViewerPane'

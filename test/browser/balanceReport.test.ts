@@ -1,0 +1,63 @@
+/**
+ * Browser tests of the balance assistant panel and the report/CSV exports on the demo building
+ * (headless Chromium). The balance check is physical: applying the best suggestion must bring the
+ * first floor's centre of rigidity closer to its centre of mass (docs/balance.md).
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { distance, markerAt, openApp, waitForCurrentAnalysis } from './appDriver'
+import { startBrowserSession } from './harness'
+import type { BrowserSession } from './harness'
+
+let session: BrowserSession
+
+beforeAll(async () => {
+  session = await startBrowserSession()
+})
+afterAll(async () => {
+  await session?.close()
+})
+
+describe('balance assistant panel', () => {
+  it('finds ranked changes off the main thread and applies one as a single undo step', async () => {
+    const { page, errors, context } = await session.newPage()
+    await openApp(page, session.url)
+    const before = distance(await markerAt(page, 'cm'), await markerAt(page, 'cr'))
+    await page.getByTestId('balance-find').click()
+    await page.getByTestId('balance-suggestions').waitFor({ timeout: 90000 })
+    await expect(page.getByTestId('balance-panel').textContent()).resolves.toContain('Preliminary')
+    await page.getByTestId('balance-apply-0').click()
+    await waitForCurrentAnalysis(page)
+    const after = distance(await markerAt(page, 'cm'), await markerAt(page, 'cr'))
+    expect(after).toBeLessThan(before)
+    await session.screenshot(page, 'balance-applied')
+    // one undo restores the eccentricity of the demo (to the marker's precision)
+    await page.keyboard.press('Control+z')
+    await waitForCurrentAnalysis(page)
+    const undone = distance(await markerAt(page, 'cm'), await markerAt(page, 'cr'))
+    expect(undone).toBeCloseTo(before, 6)
+    expect(errors).toEqual([])
+    await context.close()
+  })
+})
+
+describe('report actions', () => {
+  it('downloads the printable report with the caution, and the tables as CSV', async () => {
+    const { page, errors, context } = await session.newPage()
+    await openApp(page, session.url)
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('report-download').click()])
+    expect(download.suggestedFilename()).toMatch(/-report\.html$/)
+    const path = await download.path()
+    const { readFileSync } = await import('node:fs')
+    const html = readFileSync(path, 'utf8')
+    expect(html).toContain('licensed structural engineer')
+    expect(html).toContain('Corner Block, Quarry Street')
+    const csv = page.waitForEvent('download')
+    await page.getByTestId('csv-download').click()
+    const first = await csv
+    expect(first.suggestedFilename()).toMatch(/\.csv$/)
+    const text = readFileSync(await first.path(), 'utf8')
+    expect(text.split('\r\n')[0]).toMatch(/^# .*licensed structural engineer/)
+    expect(errors).toEqual([])
+    await context.close()
+  })
+})
