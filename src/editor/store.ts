@@ -49,6 +49,8 @@ export interface ToolMemory {
   readonly pressedId?: string
   /** Wall or frame line end being stretched. */
   readonly handle?: { readonly id: string; readonly end: 'p1' | 'p2' }
+  /** Slab outline vertex being dragged (pick tool). */
+  readonly vertex?: { readonly slab: string; readonly index: number }
   /** Centre of a rotation, m. */
   readonly pivot?: Point
   /** Pointer angle about the pivot when the turn started, rad. */

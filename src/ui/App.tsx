@@ -42,7 +42,7 @@ import { useEditor, useEditorPick } from './hooks/useEditor'
 import { Inspector } from './Inspector'
 import type { InspectedKind } from './Inspector'
 import { PlanCanvas } from './PlanCanvas'
-import type { PlanPointerEvent, PlanPreview } from './PlanCanvas'
+import type { PlanHandle, PlanPointerEvent, PlanPreview } from './PlanCanvas'
 import { planScene, sceneBounds } from './planScene'
 import { ProblemsPanel } from './ProblemsPanel'
 import { downloadProject, readProjectText } from './projectFile'
@@ -312,7 +312,11 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
   const bounds = useMemo(() => sceneBounds(doc, scene), [doc, scene])
   const overlay = useMemo(() => floorOverlay(state.result, floorId), [state.result, floorId])
   const handles = useMemo(
-    () => selectionHandles(doc, floorId, selection, (ROTATE_HANDLE_OFFSET * PICK_PIXELS) / viewScale),
+    // Slab vertex handles are drawn with the slab itself; the canvas draws the others.
+    () =>
+      selectionHandles(doc, floorId, selection, (ROTATE_HANDLE_OFFSET * PICK_PIXELS) / viewScale).filter(
+        (h): h is PlanHandle => h.kind !== 'vertex',
+      ),
     [doc, floorId, selection, viewScale],
   )
   const preview = useMemo(() => previewOf(ephemeral.draft, wallThickness), [ephemeral.draft, wallThickness])

@@ -1,10 +1,15 @@
-/** Selection handles: wall/frame endpoints (stretch) and a rotation handle above the selection. */
+/**
+ * Selection handles: wall/frame endpoints (stretch), outline vertices of selected slabs (reshape) and
+ * a rotation handle above the selection.
+ */
 import type { FloorId, Point, Project } from '@/model'
+import { contentFloorId } from '@/model'
 import { boundsOfIds } from './bounds'
 import { isOnFloor } from './visible'
 
 export type Handle =
   | { readonly kind: 'endpoint'; readonly id: string; readonly end: 'p1' | 'p2'; readonly at: Point }
+  | { readonly kind: 'vertex'; readonly id: string; readonly index: number; readonly at: Point }
   | { readonly kind: 'rotate'; readonly at: Point; readonly pivot: Point }
 
 /**
@@ -19,6 +24,12 @@ export function selectionHandles(doc: Project, floor: FloorId, selection: readon
     if (!e || !isOnFloor(doc, e, floor)) continue
     handles.push({ kind: 'endpoint', id, end: 'p1', at: e.p1 }, { kind: 'endpoint', id, end: 'p2', at: e.p2 })
   }
+  const content = contentFloorId(doc, floor)
+  for (const id of selection) {
+    const slab = doc.slabs[id]
+    if (!slab || slab.floor !== content) continue
+    slab.outline.forEach((at, index) => handles.push({ kind: 'vertex', id, index, at }))
+  }
   const box = boundsOfIds(doc, selection)
   if (box) {
     const pivot = { x: (box.min.x + box.max.x) / 2, y: (box.min.y + box.max.y) / 2 }
@@ -27,7 +38,7 @@ export function selectionHandles(doc: Project, floor: FloorId, selection: readon
   return handles
 }
 
-/** The handle within tolerance of p (endpoints before the rotation handle), or null. */
+/** The handle within tolerance of p (endpoints and vertices before the rotation handle), or null. */
 export function hitHandle(handles: readonly Handle[], p: Point, tolerance: number): Handle | null {
   let best: Handle | null = null
   let bestD = Infinity

@@ -93,6 +93,24 @@ describe('pickTool', () => {
     expect(store.getState().doc.walls.w1?.p2).toEqual({ x: 4, y: 0 })
   })
 
+  it('reshapes a selected slab by dragging an outline vertex, in one undo step; Escape puts it back', () => {
+    const store = createTestEditor()
+    setSelection(store, ['s1'])
+    // vertex 2 of s1 is (12, 8); pull it to (14, 9) with snapping off (Alt)
+    drag(store, { x: 12, y: 8 }, { x: 14, y: 9 }, { alt: true })
+    expect(store.getState().doc.slabs.s1?.outline[2]).toEqual({ x: 14, y: 9 })
+    expect(store.getState().doc.slabs.s1?.outline[1]).toEqual({ x: 12, y: 0 })
+    expect(undo(store)).toBe(true)
+    expect(store.getState().doc.slabs.s1?.outline[2]).toEqual({ x: 12, y: 8 })
+    expect(redo(store)).toBe(true)
+    expect(store.getState().doc.slabs.s1?.outline[2]).toEqual({ x: 14, y: 9 })
+    drag(store, { x: 14, y: 9 }, { x: 13, y: 13 }, { alt: true, release: false })
+    expect(store.getState().doc.slabs.s1?.outline[2]).toEqual({ x: 13, y: 13 })
+    send(store, { type: 'key', key: 'Escape' })
+    expect(store.getState().doc.slabs.s1?.outline[2]).toEqual({ x: 14, y: 9 })
+    expect(hasRedo(store.getState().history)).toBe(false)
+  })
+
   it('turns the selection by the rotation handle about its box centre (+90°)', () => {
     const store = createTestEditor()
     setSelection(store, ['w1'])

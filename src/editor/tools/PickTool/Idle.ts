@@ -24,6 +24,11 @@ export const PickIdle: ToolStateNode = {
       ctx.transition('stretching', { handle: { id: handle.id, end: handle.end }, markId, origin: e.point })
       return
     }
+    if (handle?.kind === 'vertex') {
+      const markId = mark(ctx.store, 'reshape slab')
+      ctx.transition('reshaping', { vertex: { slab: handle.id, index: handle.index }, markId, origin: e.point })
+      return
+    }
     if (handle?.kind === 'rotate') {
       const markId = mark(ctx.store, 'rotate')
       const startAngle = Math.atan2(e.point.y - handle.pivot.y, e.point.x - handle.pivot.x)
