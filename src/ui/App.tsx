@@ -124,6 +124,8 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
 
   const [units, setUnits] = useState<UnitSystem>(storedUnits)
   const [showOverlays, setShowOverlays] = useState(true)
+  // Time history is the heaviest stage: run it only while the engineer asks for the ground-motion response.
+  const [withMotion, setWithMotion] = useState(false)
   const [fitRequest, setFitRequest] = useState(0)
   const [banner, setBanner] = useState<Banner | null>(startupNotice ? { kind: 'info', title: startupNotice, lines: [] } : null)
   const [autosavedAt, setAutosavedAt] = useState<string | null>(null)
@@ -143,8 +145,8 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
     [],
   )
   useEffect(() => {
-    analysis.request(revision, doc)
-  }, [analysis, revision, doc])
+    analysis.request(revision, doc, withMotion ? { timeHistory: true } : undefined)
+  }, [analysis, revision, doc, withMotion])
   const firstRevision = useRef(revision)
   useEffect(() => {
     if (revision !== firstRevision.current) autosaver.schedule(doc)
@@ -394,6 +396,17 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
               {u === 'SI' ? 'SI (kN, m)' : 'US (kip, ft)'}
             </button>
           ))}
+        </div>
+        <div className="group" role="group" aria-label="Analysis">
+          <button
+            type="button"
+            data-testid="toggle-motion"
+            aria-pressed={withMotion}
+            title="Also run the time history with the project's ground motion (slower); the 3D view can then play it"
+            onClick={() => setWithMotion((v) => !v)}
+          >
+            Ground motion
+          </button>
         </div>
         <input ref={fileInput} type="file" accept=".json,application/json" data-testid="file-input" hidden onChange={(e) => void onOpenChange(e)} />
       </header>

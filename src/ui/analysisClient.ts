@@ -43,7 +43,8 @@ export interface AnalysisState {
 }
 
 export interface AnalysisClient {
-  request(revision: number, project: Project): void
+  /** Ask for an analysis of `project` at `revision`; `options` overrides the client's defaults. */
+  request(revision: number, project: Project, options?: AnalysisOptions): void
   getState(): AnalysisState
   subscribe(listener: () => void): () => void
   dispose(): void
@@ -148,10 +149,10 @@ export function createAnalysisClient(config: AnalysisClientOptions): AnalysisCli
   }
 
   return {
-    request(revision, project) {
+    request(revision, project, override) {
       if (disposed) return
       if (waiting) set({ skipped: state.skipped + 1 })
-      waiting = { revision, project, options }
+      waiting = { revision, project, options: override ?? options }
       askedAt.set(revision, now())
       set({ requestedRevision: revision, isStale: state.answeredRevision !== revision })
       pump()
