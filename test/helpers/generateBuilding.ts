@@ -31,6 +31,7 @@ import type {
 import { choleskyFactor, choleskySolveRows } from '@/engine/eigen'
 import type { AssembledElement, FloorProps, Structure } from '@/engine/results'
 import type { StiffnessSolver } from '@/engine/solve'
+import { seededRandom } from '@/engine/groundMotion'
 
 /** Options of `generateBuilding`. */
 export interface GenerateBuildingOptions {
@@ -51,17 +52,8 @@ export interface GenerateBuildingOptions {
   readonly typicalFloors?: boolean
 }
 
-/** Mulberry32: small, fast, seeded 32-bit generator; returns numbers in [0, 1). */
-export function createRandom(seed: number): () => number {
-  let a = seed >>> 0
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0
-    let t = a
-    t = Math.imul(t ^ (t >>> 15), t | 1)
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
-}
+/** Mulberry32: small, fast, seeded 32-bit generator; returns numbers in [0, 1) (the engine's own). */
+export const createRandom = seededRandom
 
 const round = (v: number, step = 0.05): number => Math.round(v / step) * step
 

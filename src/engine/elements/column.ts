@@ -9,6 +9,7 @@ import type { Column, ColumnFixity, Project } from '@/model'
 import { elementMapRow, extendWithSupportFloor } from '../dofs'
 import type { AssembledElement, Issue } from '../results'
 import { shearChainStiffness } from './frameLine'
+import { leftOutIssue, positive } from './leftOut'
 
 /**
  * Story stiffness of a column, N/m: 12 E I f / h³ with both ends fixed against rotation, 3 E I f / h³
@@ -27,8 +28,6 @@ export function columnStoryStiffness(
   return (c * E * I * factor) / (h * h * h)
 }
 
-const positive = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v) && v > 0
-
 /**
  * The two assembled-element records of a column: 'columnX' acts along local x
  * (d = (cos a, sin a), uses I_y) and 'columnY' along local y (d = (-sin a, cos a), uses I_x).
@@ -39,14 +38,7 @@ export function buildColumnElements(
 ): { elements: AssembledElement[]; issues: Issue[] } {
   const fail = (code: Issue['code'], why: string): { elements: AssembledElement[]; issues: Issue[] } => ({
     elements: [],
-    issues: [
-      {
-        code,
-        severity: 'warning',
-        message: `[engine] column ${column.id} (${column.name}): ${why}; it is left out of the analysis`,
-        refs: [column.id],
-      },
-    ],
+    issues: [leftOutIssue('column', column.id, column.name, code, why)],
   })
   const range = elementFloorRange(project, column)
   if (!range) {

@@ -7,6 +7,7 @@ import { elementFloorRange } from '@/model'
 import type { FrameLine, Project } from '@/model'
 import { elementMapRow, extendWithSupportFloor, segmentDirection } from '../dofs'
 import type { AssembledElement, Issue } from '../results'
+import { leftOutIssue, positive } from './leftOut'
 
 /**
  * Story stiffness of a regular moment frame by the equal-joint-rotation method, N/m:
@@ -69,8 +70,6 @@ export function shearChainStiffness(storyStiffness: ArrayLike<number>): Float64A
   return K
 }
 
-const positive = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v) && v > 0
-
 /** Assembled-element record of a frame line (issues instead of exceptions for bad input). */
 export function buildFrameLineElement(
   project: Pick<Project, 'floors' | 'materials'>,
@@ -78,14 +77,7 @@ export function buildFrameLineElement(
 ): { element: AssembledElement | null; issues: Issue[] } {
   const fail = (code: Issue['code'], why: string): { element: null; issues: Issue[] } => ({
     element: null,
-    issues: [
-      {
-        code,
-        severity: 'warning',
-        message: `[engine] frame line ${frame.id} (${frame.name}): ${why}; it is left out of the analysis`,
-        refs: [frame.id],
-      },
-    ],
+    issues: [leftOutIssue('frame line', frame.id, frame.name, code, why)],
   })
   const seg = segmentDirection(frame.p1, frame.p2)
   if (!seg) return fail('zero-length', 'its two end points coincide (zero length)')

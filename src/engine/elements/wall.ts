@@ -8,6 +8,7 @@ import { elementFloorRange } from '@/model'
 import type { Project, Wall } from '@/model'
 import { elementMapRow, extendWithSupportFloor, segmentDirection } from '../dofs'
 import type { AssembledElement, Issue } from '../results'
+import { leftOutIssue, positive } from './leftOut'
 
 /** Bending and shear rigidity of one story of a wall. */
 export interface WallStory {
@@ -122,8 +123,6 @@ export function wallStackStiffness(stories: readonly WallStory[]): Float64Array 
   return K
 }
 
-const positive = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v) && v > 0
-
 /**
  * Assembled-element record of a wall: per story I = t L³/12 f_I, A_s = (5/6) t L f_A,
  * G = E/(2(1+nu)), overrides from `wall.stories` keyed by the story's top floor id. A wall standing
@@ -137,14 +136,7 @@ export function buildWallElement(
 ): { element: AssembledElement | null; issues: Issue[] } {
   const fail = (code: Issue['code'], why: string): { element: null; issues: Issue[] } => ({
     element: null,
-    issues: [
-      {
-        code,
-        severity: 'warning',
-        message: `[engine] wall ${wall.id} (${wall.name}): ${why}; it is left out of the analysis`,
-        refs: [wall.id],
-      },
-    ],
+    issues: [leftOutIssue('wall', wall.id, wall.name, code, why)],
   })
   const seg = segmentDirection(wall.p1, wall.p2)
   if (!seg) return fail('zero-length', 'its two end points coincide (zero length)')
