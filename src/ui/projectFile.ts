@@ -1,6 +1,7 @@
 /** Reading and writing the project file at the browser edge. */
 import { parseProject, serializeProject } from '@/model'
 import type { Project } from '@/model'
+import { downloadBlob } from '@/viewer'
 
 export type OpenResult =
   | { readonly ok: true; readonly project: Project; readonly warnings: readonly string[] }
@@ -42,15 +43,6 @@ export function projectFileName(project: Project): string {
 /** Start a download of the project as a .json file (Blob + temporary link). */
 export function downloadProject(project: Project): string {
   const name = projectFileName(project)
-  const blob = new Blob([projectToText(project)], { type: 'application/json' })
-  const url = URL.createObjectURL(blob)
-  const link = document.createElement('a')
-  link.href = url
-  link.download = name
-  link.style.display = 'none'
-  document.body.appendChild(link)
-  link.click()
-  link.remove()
-  setTimeout(() => URL.revokeObjectURL(url), 1000)
+  downloadBlob(new Blob([projectToText(project)], { type: 'application/json' }), name)
   return name
 }

@@ -4,4 +4,5 @@
  */
 export { ViewerPane } from './ViewerPane'
 export { characterWords } from './modeMeaning'
+export { downloadBlob } from './exportMedia'
 export type { ViewerPaneProps } from './ViewerPane'

@@ -2,22 +2,12 @@
  * Browser side of the report buttons: save text as a file through a Blob link, and open HTML in a
  * new window (or, when pop-ups are blocked, a hidden frame) to print it.
  */
+import { downloadBlob } from '@/viewer'
 import type { DownloadFile } from './reportFiles'
 
 /** Save one file through a temporary object URL and an <a download> click. */
-export function downloadFile(file: DownloadFile, doc: Document = document): void {
-  const blob = new Blob([file.text], { type: file.mime })
-  const url = URL.createObjectURL(blob)
-  const a = doc.createElement('a')
-  a.href = url
-  a.download = file.fileName
-  a.rel = 'noopener'
-  a.style.display = 'none'
-  doc.body.appendChild(a)
-  a.click()
-  a.remove()
-  // Revoke later: some browsers start the download only after the click handler returns.
-  setTimeout(() => URL.revokeObjectURL(url), 10_000)
+export function downloadFile(file: DownloadFile): void {
+  downloadBlob(new Blob([file.text], { type: file.mime }), file.fileName)
 }
 
 /**
