@@ -11,7 +11,8 @@ import { runStaticTorsion } from './loads'
 import { solveModes } from './modal'
 import type { AnalysisOptions, AnalysisResult, Issue } from './results'
 import { createStiffnessSolver } from './solve'
-import { runSpectrum } from './spectrum'
+import { computeElementForces } from './elementForces'
+import { runSpectrumDetailed } from './spectrum'
 import { runTimeHistory } from './timeHistory'
 
 const now = (): number => (typeof performance !== 'undefined' ? performance.now() : Date.now())
@@ -96,8 +97,14 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
   lap('torsion')
   const regularity = criterion.set ? evaluateRegularity(structure, centres, criterion.set) : null
 
-  const spectrum = options.spectrum === false ? null : runSpectrum(structure, modes, project.settings)
+  const spectrumDetail =
+    options.spectrum === false
+      ? null
+      : runSpectrumDetailed(structure, modes, project.settings, { solver: solver.solver, torsion })
+  const spectrum = spectrumDetail?.result ?? null
   lap('spectrum')
+  const elementForces = computeElementForces(structure, torsion, spectrumDetail)
+  lap('elementForces')
   const timeHistory = options.timeHistory ? runTimeHistory(structure, modes, project.settings) : null
   if (options.timeHistory) lap('timeHistory')
 
@@ -111,5 +118,6 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
     regularity,
     spectrum,
     timeHistory,
+    elementForces,
   }
 }

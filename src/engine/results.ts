@@ -6,7 +6,7 @@
  * Ownership while the engine is being built: the "structure/modal/centres" sections belong to the
  * mechanics work, the "torsion/spectrum/time history/criteria" sections to the loads work.
  */
-import type { Point, SpectrumSpec } from '@/model'
+import type { Point, SpectrumModeRule, SpectrumSpec } from '@/model'
 
 // ---------------------------------------------------------------- issues
 
@@ -283,6 +283,100 @@ export interface SpectrumResult {
   readonly excitationY: readonly SpectrumFloorResponse[]
   readonly combined: readonly SpectrumFloorResponse[]
   readonly directionCombination: 'srss' | '100-30'
+  /** Mode rule used (settings.spectrumModes; absent in older results: all modes given). */
+  readonly modeRule?: SpectrumModeRule
+  /** 'modal-result': the analysis's modes; 'all-modes': every mode, solved again for the spectrum. */
+  readonly modeSource?: 'modal-result' | 'all-modes'
+  /** Periods of the modes combined as modes of their own (the residual not included), s. */
+  readonly modePeriods?: Float64Array
+  /**
+   * The residual rigid mode ('full-mass' rule): its period (0.05 s), ordinate and effective mass
+   * ratio per excitation direction; null when the rule has none. `modalSa`, `modalBaseShear` and
+   * `correlation` then have one more entry (the residual, last) than `modeCount`.
+   */
+  readonly residual?: {
+    readonly periodS: number
+    readonly saG: number
+    readonly massRatio: { readonly x: number; readonly y: number }
+  } | null
+  /** Effective mass ratio of all combined modes (residual included) per excitation direction, -. */
+  readonly massRatio?: { readonly x: number; readonly y: number }
+  /** Spectrum results with the accidental torsion envelope added; absent when the fraction is 0. */
+  readonly accidentalTorsion?: SpectrumAccidentalTorsion
+}
+
+/** One storey's drift ratio from spectrum peaks with accidental torsion. */
+export interface SpectrumTorsionStory {
+  readonly floorId: string
+  /** Largest peak drift over the extreme points along the excitation, m. */
+  readonly driftMax: number
+  /** Mean of the two ends' peak drifts, m. */
+  readonly driftAvg: number
+  /** driftMax / driftAvg (capped at 1000), -. */
+  readonly driftRatio: number
+  /** driftMax / storey height, -. */
+  readonly driftIndex: number
+}
+
+/** Accidental torsion on spectrum results: static storey torques, envelope of +e and -e. */
+export interface SpectrumAccidentalTorsion {
+  /** Fraction of the perpendicular plan extent, -. */
+  readonly eccentricityFraction: number
+  /** Floor forces: the ELF vertical distribution w z^k scaled to the spectrum's CQC base shear. */
+  readonly forcePattern: 'elf-scaled-to-spectrum'
+  readonly exponent: { readonly x: number; readonly y: number }
+  /** Floor forces per direction, N. */
+  readonly forces: { readonly x: Float64Array; readonly y: Float64Array }
+  /** Floor torques of the +e case per direction, N·m (the -e case is the negative). */
+  readonly torques: { readonly x: Float64Array; readonly y: Float64Array }
+  /** Spectrum peaks + |static torsion response| (story shears unchanged). */
+  readonly excitationX: readonly SpectrumFloorResponse[]
+  readonly excitationY: readonly SpectrumFloorResponse[]
+  readonly combined: readonly SpectrumFloorResponse[]
+  /** Drift ratios per storey for excitation along X (drifts along x) and along Y. */
+  readonly stories: {
+    readonly x: readonly SpectrumTorsionStory[]
+    readonly y: readonly SpectrumTorsionStory[]
+  }
+}
+
+// ---------------------------------------------------------------- element forces
+
+/** One load case of the element forces. */
+export interface ElementForceCase {
+  /** 'X+e', 'X-e', 'Y+e', 'Y-e', 'spectrum-x', 'spectrum-y', 'spectrum', and the same spectrum ids
+   * with '+torsion' when the accidental torsion envelope is added. */
+  readonly id: string
+  /** Words for screens and reports. */
+  readonly label: string
+  readonly kind: 'static' | 'spectrum'
+  /** Direction of the load the shares refer to; 'both': the element's own main axis. */
+  readonly direction: 'x' | 'y' | 'both'
+  readonly accidentalTorsion: boolean
+}
+
+/** Storey shears and overturning moments of one assembled element, per case (`cases` order). */
+export interface ElementForceRow {
+  /** Id of the model element (a column gives two rows, kinds 'columnX' and 'columnY'). */
+  readonly elementId: string
+  readonly kind: AssembledElement['kind']
+  /** Unit direction d of the element's line. */
+  readonly direction: { readonly x: number; readonly y: number }
+  /** The storeys the element occupies, named by the floor above each, bottom first. */
+  readonly floorIds: readonly string[]
+  /** Storey shear along d per case, N (signed for static cases, peak >= 0 for spectrum cases). */
+  readonly shear: readonly Float64Array[]
+  /** Share of the storey shear along the load per case, -. */
+  readonly share: readonly Float64Array[]
+  /** Overturning moment at the bottom of each storey per case, N·m. */
+  readonly overturningMoment: readonly Float64Array[]
+}
+
+/** Where the storey shear goes, element by element. Carries the caution. */
+export interface ElementForcesResult {
+  readonly cases: readonly ElementForceCase[]
+  readonly elements: readonly ElementForceRow[]
+  readonly caution: string
 }
 
 // ---------------------------------------------------------------- time history (loads)
@@ -344,6 +438,8 @@ export interface AnalysisResult {
   readonly timeHistory: TimeHistoryResult | null
   /** Criterion set evaluation of plan regularity (eccentricity / radius rules), if the set has any. */
   readonly regularity: CriterionEvaluation | null
+  /** Element storey shears and overturning moments (static cases and spectrum); absent if not run. */
+  readonly elementForces?: ElementForcesResult | null
   /** Always present: results are preliminary. */
   readonly caution: string
   /** Wall-clock milliseconds per stage (informative). */

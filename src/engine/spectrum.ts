@@ -3,15 +3,28 @@
  * CQC (SRSS beside it) and over the two horizontal excitation directions by SRSS or the 100/30
  * rule.
  * Differences (story drifts at the extreme points) are formed in each mode before combining.
- * All modes of the modal result are combined; the rising branch below T0 is kept; no base-shear
- * scaling unless `settings.baseShearTarget` is given.
- * @see MODELING.md "Response spectrum"; METHODS.md §1-§3
+ * By default every mode with T >= 0.05 s plus one residual rigid mode carrying the rest of the
+ * mass is combined (100% of the mass); the 90% rule is a setting. The rising branch below T0 is
+ * kept; no base-shear scaling unless `settings.baseShearTarget` is given. Accidental torsion is
+ * added as static storey torques (envelope of +e and -e) in separate result fields.
+ * @see MODELING.md "Response spectrum"; METHODS.md §1-§3; docs/dynamics.md §8-§9
  */
 import type { AnalysisSettings } from '@/model'
 import { combineCqc, combineSrss, cqcMatrix } from './cqc'
-import { extremePointDrifts } from './loads'
-import type { ModalResult, SpectrumFloorResponse, SpectrumResult, Structure } from './results'
-import { GRAVITY, spectralAcceleration } from './spectra'
+import { dominantPeriod, extremePointDrifts, verticalDistributionExponent } from './loads'
+import type {
+  ModalResult,
+  SpectrumFloorResponse,
+  SpectrumResult,
+  SpectrumTorsionStory,
+  StaticTorsionResult,
+  Structure,
+} from './results'
+import { createStiffnessSolver } from './solve'
+import type { StiffnessSolver } from './solve'
+import { directionModalResponses, selectSpectrumModes } from './spectrumModes'
+import type { DirectionModalResponses, SpectrumModeSet } from './spectrumModes'
+import { accidentalTorsionLoads, peakDriftRatio } from './spectrumTorsion'
 
 export { spectralAcceleration } from './spectra'
 
@@ -32,52 +45,23 @@ export function combineDirections(a: number, b: number, rule: 'srss' | '100-30')
   return rule === 'srss' ? Math.hypot(a, b) : Math.max(a + 0.3 * b, 0.3 * a + b)
 }
 
-/**
- * Modal peak displacement vectors for excitation along one direction:
- * u_m = Gamma_m Sa_m g / omega_m² phi_m (global order at O), mode-major count x dofCount, m, rad.
- */
-export function modalPeakDisplacements(
-  modes: ModalResult,
-  direction: Dir,
-  modalSaG: ArrayLike<number>,
-): Float64Array {
-  const n = modes.dofCount
-  const out = new Float64Array(modes.count * n)
-  for (let m = 0; m < modes.count; m++) {
-    const w = modes.angularFrequencies[m]!
-    if (!(w > 0)) continue
-    const D = (modes.participation[direction][m]! * modalSaG[m]! * GRAVITY) / (w * w)
-    for (let i = 0; i < n; i++) out[m * n + i] = D * modes.shapes[m * n + i]!
-  }
-  return out
-}
-
 function floorPeaks(
   structure: Structure,
-  modes: ModalResult,
+  count: number,
   u: Float64Array,
+  p: Float64Array,
   rho: Float64Array,
 ): FloorPeaks[] {
   const nf = structure.floorCount
   const n = structure.dofCount
-  const count = modes.count
-  const M = structure.mass
-  // Modal floor inertia forces f_m = omega_m² M u_m (x and y components per floor).
+  // Modal floor forces (x and y components per floor): omega_m² M u_m for a mode, the residual load
+  // for the residual mode (both equal K u_m).
   const fx = new Float64Array(count * nf)
   const fy = new Float64Array(count * nf)
   for (let m = 0; m < count; m++) {
-    const w2 = modes.angularFrequencies[m]! ** 2
     for (let f = 0; f < nf; f++) {
-      let sx = 0
-      let sy = 0
-      for (let j = 0; j < n; j++) {
-        const uj = u[m * n + j]!
-        if (uj === 0) continue
-        sx += M[(3 * f) * n + j]! * uj
-        sy += M[(3 * f + 1) * n + j]! * uj
-      }
-      fx[m * nf + f] = w2 * sx
-      fy[m * nf + f] = w2 * sy
+      fx[m * nf + f] = p[m * n + 3 * f]!
+      fy[m * nf + f] = p[m * n + 3 * f + 1]!
     }
   }
   const modal = new Float64Array(count)
@@ -168,34 +152,114 @@ function combinePeaks(a: FloorPeaks, b: FloorPeaks, rule: 'srss' | '100-30'): Fl
   }
 }
 
+/** Extra inputs of a spectrum run inside `analyzeProject`. */
+export interface SpectrumExtras {
+  /** Factorization of K (residual mode, accidental torsion); factored here when absent. */
+  readonly solver?: StiffnessSolver
+  /**
+   * Static torsion result: its eccentricity fraction and ELF exponents are used for the accidental
+   * torsion on spectrum results. Absent: settings.accidentalEccentricity and k from the dominant
+   * period of each direction.
+   */
+  readonly torsion?: StaticTorsionResult | null
+}
+
+/** The per-mode data behind a SpectrumResult, for element forces (never serialized). */
+export interface SpectrumDetail {
+  readonly result: SpectrumResult
+  readonly set: SpectrumModeSet
+  readonly rho: Float64Array
+  /** Unscaled modal responses per excitation direction. */
+  readonly responses: { readonly x: DirectionModalResponses; readonly y: DirectionModalResponses }
+  /** Base-shear scale factor per excitation direction. */
+  readonly scale: { readonly x: number; readonly y: number }
+  readonly rule: 'srss' | '100-30'
+  /** Static displacements under the +e accidental torques (already at the scaled level), or null. */
+  readonly torsionDisplacements: { readonly x: Float64Array; readonly y: Float64Array } | null
+  /**
+   * Combined storey shears (scaled), N: storyShear[excitation][component][floor], component 0 = x,
+   * 1 = y; 'both' after the direction rule.
+   */
+  readonly storyShear: Readonly<Record<'x' | 'y' | 'both', readonly [Float64Array, Float64Array]>>
+}
+
+function addTorsion(structure: Structure, p: FloorPeaks, u: Float64Array, f: number): FloorPeaks {
+  const cm = structure.floors[f]!.centreOfMass
+  const o = 3 * f
+  const tx = Math.abs(u[o]! - u[o + 2]! * cm.y)
+  const ty = Math.abs(u[o + 1]! + u[o + 2]! * cm.x)
+  const tr = Math.abs(u[o + 2]!)
+  const dx = extremePointDrifts(structure, u, f, 'x')
+  const dy = extremePointDrifts(structure, u, f, 'y')
+  const plus = (a: Float64Array, b: Float64Array): Float64Array => a.map((v, k) => v + Math.abs(b[k]!))
+  return {
+    dispCqc: [p.dispCqc[0] + tx, p.dispCqc[1] + ty, p.dispCqc[2] + tr],
+    dispSrss: [p.dispSrss[0] + tx, p.dispSrss[1] + ty, p.dispSrss[2] + tr],
+    driftCqc: { x: plus(p.driftCqc.x, dx), y: plus(p.driftCqc.y, dy) },
+    driftSrss: { x: plus(p.driftSrss.x, dx), y: plus(p.driftSrss.y, dy) },
+    // Pure torques add no storey shear along x or y.
+    shearCqc: [p.shearCqc[0], p.shearCqc[1]],
+  }
+}
+
 /**
- * Response spectrum analysis, CQC (equal modal damping = settings.damping) and SRSS over all modes,
- * the two excitation directions combined by `settings.directionCombination`.
+ * Response spectrum analysis, CQC (equal modal damping = settings.damping) and SRSS over the
+ * response modes of `selectSpectrumModes` (by default every mode with T >= 0.05 s plus one residual
+ * rigid mode, so 100% of the mass), the two excitation directions combined by
+ * `settings.directionCombination`.
  * Base-shear scaling (only with `settings.baseShearTarget`, N): each direction's results are scaled
  * by target / CQC base shear along that direction; `baseShear` is reported after scaling.
- * @see MODELING.md "Response spectrum"; Der Kiureghian (1981) for CQC (METHODS.md §3)
+ * Accidental torsion (`accidentalTorsion`): static storey torques from the ELF pattern scaled to the
+ * (scaled) CQC base shear, added as the envelope of +e and -e.
+ * @see MODELING.md "Response spectrum"; Der Kiureghian (1981) for CQC (METHODS.md §3);
+ *   ASCE/SEI 7-16 12.9.1.1 (100% of the mass, residual mode at 0.05 s)
  */
 export function runSpectrum(
   structure: Structure,
   modes: ModalResult,
   settings: AnalysisSettings,
+  extras: SpectrumExtras = {},
 ): SpectrumResult {
+  return runSpectrumDetailed(structure, modes, settings, extras).result
+}
+
+/** {@link runSpectrum} with the per-mode data used for element forces. */
+export function runSpectrumDetailed(
+  structure: Structure,
+  modes: ModalResult,
+  settings: AnalysisSettings,
+  extras: SpectrumExtras = {},
+): SpectrumDetail {
   const zeta = settings.damping
-  const count = modes.count
-  const modalSa = new Float64Array(count)
-  for (let m = 0; m < count; m++) {
-    const T = modes.periods[m]!
-    modalSa[m] = Number.isFinite(T) ? spectralAcceleration(settings.spectrum, T, zeta) : 0
+  const set = selectSpectrumModes(structure, modes, settings)
+  const count = set.count
+  const modalSa = set.saG
+  let solver = extras.solver ?? null
+  const getSolver = (): StiffnessSolver => {
+    if (!solver) {
+      const made = createStiffnessSolver(structure)
+      if (!made.ok) throw new Error('[engine] runSpectrum: the stiffness is singular (a mechanism)')
+      solver = made.solver
+    }
+    return solver
   }
-  const rho = cqcMatrix(modes.angularFrequencies, zeta)
+  const rho = cqcMatrix(set.angularFrequencies, zeta)
   const modalBaseShear = { x: new Float64Array(count), y: new Float64Array(count) }
   const peaks = {} as Record<Dir, FloorPeaks[]>
+  const responses = {} as Record<Dir, DirectionModalResponses>
   for (const d of ['x', 'y'] as const) {
-    // Modal base shear along the excitation: Gamma_m² Sa_m g (mass-normalized shapes).
+    const resp = directionModalResponses(structure, set, d, getSolver())
+    responses[d] = resp
+    // Modal base shear along the excitation: the sum of the modal floor loads along it
+    // (Gamma_m² Sa_m g for a mode with mass-normalized shapes).
+    const comp = d === 'x' ? 0 : 1
+    const n = structure.dofCount
     for (let m = 0; m < count; m++) {
-      modalBaseShear[d][m] = modes.participation[d][m]! ** 2 * modalSa[m]! * GRAVITY
+      let v = 0
+      for (let f = 0; f < structure.floorCount; f++) v += resp.loads[m * n + 3 * f + comp]!
+      modalBaseShear[d][m] = v
     }
-    peaks[d] = floorPeaks(structure, modes, modalPeakDisplacements(modes, d, modalSa), rho)
+    peaks[d] = floorPeaks(structure, count, resp.displacements, resp.loads, rho)
   }
   const baseOf = (d: Dir, cqc: boolean): number => {
     const comp = d === 'x' ? 0 : 1
@@ -217,22 +281,99 @@ export function runSpectrum(
   const ids = structure.floors.map((f) => f.id)
   const sx = scaleByDirection.x
   const sy = scaleByDirection.y
-  return {
+  const baseShear = {
+    x: { cqc: baseOf('x', true) * sx, srss: baseOf('x', false) * sx },
+    y: { cqc: baseOf('y', true) * sy, srss: baseOf('y', false) * sy },
+  }
+
+  // Accidental torsion: ELF pattern scaled to the CQC base shear of each direction.
+  const fraction = extras.torsion?.eccentricityFraction ?? settings.accidentalEccentricity
+  const exponent = extras.torsion?.exponent ?? {
+    x: verticalDistributionExponent(dominantPeriod(modes, 'x')),
+    y: verticalDistributionExponent(dominantPeriod(modes, 'y')),
+  }
+  const torsionLoads =
+    fraction > 0
+      ? accidentalTorsionLoads(
+          structure,
+          getSolver(),
+          { x: baseShear.x.cqc, y: baseShear.y.cqc },
+          exponent,
+          fraction,
+        )
+      : null
+  let accidentalTorsion: SpectrumResult['accidentalTorsion']
+  if (torsionLoads) {
+    const tu = torsionLoads.displacements
+    const withX = scaled.x.map((p, f) => addTorsion(structure, p, tu.x, f))
+    const withY = scaled.y.map((p, f) => addTorsion(structure, p, tu.y, f))
+    const stories = (d: Dir, list: FloorPeaks[]): SpectrumTorsionStory[] =>
+      list.map((p, f) => {
+        const r = peakDriftRatio(structure, f, d, p.driftCqc[d])
+        const h = structure.floors[f]!.height
+        return {
+          floorId: ids[f]!,
+          driftMax: r.driftMax,
+          driftAvg: r.driftAvg,
+          driftRatio: r.ratio,
+          driftIndex: h > 0 ? r.driftMax / h : 0,
+        }
+      })
+    accidentalTorsion = {
+      eccentricityFraction: fraction,
+      forcePattern: 'elf-scaled-to-spectrum',
+      exponent: { x: exponent.x, y: exponent.y },
+      forces: torsionLoads.forces,
+      torques: torsionLoads.torques,
+      excitationX: withX.map((p, i) => toResponse(ids[i]!, p)),
+      excitationY: withY.map((p, i) => toResponse(ids[i]!, p)),
+      combined: withX.map((p, i) => toResponse(ids[i]!, combinePeaks(p, withY[i]!, rule))),
+      stories: { x: stories('x', withX), y: stories('y', withY) },
+    }
+  }
+
+  const totalMassRatio = { x: responses.x.totalMassRatio, y: responses.y.totalMassRatio }
+  const result: SpectrumResult = {
     spectrum: settings.spectrum,
     damping: zeta,
     modalSa,
-    baseShear: {
-      x: { cqc: baseOf('x', true) * sx, srss: baseOf('x', false) * sx },
-      y: { cqc: baseOf('y', true) * sy, srss: baseOf('y', false) * sy },
-    },
+    baseShear,
     scale: Math.max(scaleByDirection.x, scaleByDirection.y),
     scaleByDirection,
-    modeCount: count,
+    modeCount: set.kept.length,
     correlation: rho,
     modalBaseShear,
     excitationX: scaled.x.map((p, i) => toResponse(ids[i]!, p)),
     excitationY: scaled.y.map((p, i) => toResponse(ids[i]!, p)),
     combined: scaled.x.map((p, i) => toResponse(ids[i]!, combinePeaks(p, scaled.y[i]!, rule))),
     directionCombination: rule,
+    modeRule: set.rule,
+    modeSource: set.source,
+    modePeriods: Float64Array.from(set.kept, (m) => set.modes.periods[m]!),
+    residual: set.hasResidual
+      ? {
+          periodS: 2 * Math.PI / set.angularFrequencies[count - 1]!,
+          saG: modalSa[count - 1]!,
+          massRatio: { x: responses.x.residualMassRatio, y: responses.y.residualMassRatio },
+        }
+      : null,
+    massRatio: totalMassRatio,
+    ...(accidentalTorsion ? { accidentalTorsion } : {}),
+  }
+  const shearArrays = (list: FloorPeaks[]): [Float64Array, Float64Array] => [
+    Float64Array.from(list, (p) => p.shearCqc[0]),
+    Float64Array.from(list, (p) => p.shearCqc[1]),
+  ]
+  const both = scaled.x.map((p, i) => combinePeaks(p, scaled.y[i]!, rule))
+  const torsionDisplacements = torsionLoads ? torsionLoads.displacements : null
+  return {
+    result,
+    set,
+    rho,
+    responses,
+    scale: scaleByDirection,
+    rule,
+    torsionDisplacements,
+    storyShear: { x: shearArrays(scaled.x), y: shearArrays(scaled.y), both: shearArrays(both) },
   }
 }

@@ -20,6 +20,7 @@ export type {
   PointMass,
   Project,
   Slab,
+  SpectrumModeRule,
   SpectrumSpec,
   Wall,
   WallStoryOverride,

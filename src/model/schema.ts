@@ -24,6 +24,7 @@ import type {
   PointMass,
   Project,
   Slab,
+  SpectrumModeRule,
   SpectrumSpec,
   Wall,
   WallStoryOverride,
@@ -1054,6 +1055,7 @@ const SETTINGS_FIELDS = [
   'spectrum',
   'directionCombination',
   'baseShearTarget',
+  'spectrumModes',
   'groundMotion',
 ] as const
 
@@ -1114,6 +1116,10 @@ function readSettings(ctx: Ctx, v: unknown): AnalysisSettings | undefined {
     o.baseShearTarget === undefined
       ? undefined
       : num(ctx, 'settings.baseShearTarget', o.baseShearTarget, { gt: 0, max: LIMITS.baseShearMax })
+  const spectrumModes =
+    o.spectrumModes === undefined
+      ? undefined
+      : oneOf(ctx, 'settings.spectrumModes', o.spectrumModes, ['full-mass', 'ninety-percent'] as const, 'full-mass')
   const groundMotion =
     o.groundMotion === undefined ? undefined : readGroundMotion(ctx, 'settings.groundMotion', o.groundMotion)
   if (ctx.errors.length > before) return undefined
@@ -1125,6 +1131,7 @@ function readSettings(ctx: Ctx, v: unknown): AnalysisSettings | undefined {
     spectrum: spectrum as SpectrumSpec,
     directionCombination: directionCombination as 'srss',
     ...(baseShearTarget !== undefined ? { baseShearTarget } : {}),
+    ...(spectrumModes !== undefined ? { spectrumModes: spectrumModes as SpectrumModeRule } : {}),
     ...(groundMotion !== undefined ? { groundMotion } : {}),
   }
 }
@@ -1371,6 +1378,7 @@ const KEY_ORDER = [
   'spectrum',
   'directionCombination',
   'baseShearTarget',
+  'spectrumModes',
   'groundMotion',
 ]
 const RANK = new Map(KEY_ORDER.map((k, i) => [k, i]))

@@ -281,8 +281,18 @@ export interface AnalysisSettings {
   readonly directionCombination: 'srss' | '100-30'
   /** Optional: scale spectrum results so the base shear equals this value in each direction, N. */
   readonly baseShearTarget?: number
+  /**
+   * Optional: which modes the response spectrum combines (absent: 'full-mass').
+   * 'full-mass': every mode with T >= 0.05 s plus one residual rigid mode for the rest of the mass;
+   * 'ninety-percent': the lowest modes until 90% of the mass in X and in Y, no residual.
+   * @see ASCE/SEI 7-16 12.9.1.1 (METHODS.md §1); docs/dynamics.md §8
+   */
+  readonly spectrumModes?: SpectrumModeRule
   readonly groundMotion?: GroundMotionSpec
 }
+
+/** Mode rule of the response spectrum (see `AnalysisSettings.spectrumModes`). */
+export type SpectrumModeRule = 'full-mass' | 'ninety-percent'
 
 /** A whole project (the document). */
 export interface Project {

@@ -243,6 +243,19 @@ describe('parseProject', () => {
     expect(errorsOf(asce)).toEqual(['settings.spectrum.SD1: must be > 0, got -0.6'])
   })
 
+  it('reads the optional spectrum mode rule, keeps it on save and names the field when it is wrong', () => {
+    const doc = copy(box)
+    setPath(doc, 'settings.spectrumModes', 'ninety-percent')
+    const { project } = projectOf(doc)
+    expect(project.settings.spectrumModes).toBe('ninety-percent')
+    expect(projectOf(JSON.parse(serializeProject(project))).project.settings.spectrumModes).toBe('ninety-percent')
+    expect(projectOf(copy(box)).project.settings.spectrumModes).toBeUndefined()
+    setPath(doc, 'settings.spectrumModes', 'all')
+    expect(errorsOf(doc)).toEqual([
+      'settings.spectrumModes: must be one of "full-mass", "ninety-percent", got "all"',
+    ])
+  })
+
   it('refuses a newer version with a message that says to update', () => {
     const doc = copy(box)
     doc.version = 7
