@@ -308,14 +308,16 @@ export interface SpectrumResult {
 /** One storey's drift ratio from spectrum peaks with accidental torsion. */
 export interface SpectrumTorsionStory {
   readonly floorId: string
-  /** Largest peak drift over the extreme points along the excitation, m. */
+  /** Largest enveloped drift (peak + |torsion|) over the extreme points along the excitation, m. */
   readonly driftMax: number
-  /** Mean of the two ends' peak drifts, m. */
+  /** Mean of the two ends' drifts (peak + signed torsion) for the governing sign of e, m. */
   readonly driftAvg: number
-  /** driftMax / driftAvg (capped at 1000), -. */
+  /** Largest drift / driftAvg for the governing sign of e (capped at 1000), -. */
   readonly driftRatio: number
   /** driftMax / storey height, -. */
   readonly driftIndex: number
+  /** Sign of e (+1: +e case torques, -1: -e) that gives the larger ratio. */
+  readonly governingSign: 1 | -1
 }
 
 /** Accidental torsion on spectrum results: static storey torques, envelope of +e and -e. */

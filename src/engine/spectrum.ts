@@ -307,16 +307,29 @@ export function runSpectrumDetailed(
     const tu = torsionLoads.displacements
     const withX = scaled.x.map((p, f) => addTorsion(structure, p, tu.x, f))
     const withY = scaled.y.map((p, f) => addTorsion(structure, p, tu.y, f))
+    // Ratios per sign of e: the spectrum peak taken along the load at every point (common
+    // practice) plus the signed static torsion drift; the sign with the larger ratio governs.
     const stories = (d: Dir, list: FloorPeaks[]): SpectrumTorsionStory[] =>
       list.map((p, f) => {
-        const r = peakDriftRatio(structure, f, d, p.driftCqc[d])
+        const dt = extremePointDrifts(structure, tu[d], f, d)
         const h = structure.floors[f]!.height
+        let best: ReturnType<typeof peakDriftRatio> | null = null
+        let sign: 1 | -1 = 1
+        for (const sg of [1, -1] as const) {
+          const r = peakDriftRatio(structure, f, d, p.driftCqc[d].map((v, k) => v + sg * dt[k]!))
+          if (!best || r.ratio > best.ratio) {
+            best = r
+            sign = sg
+          }
+        }
+        const driftMax = p.driftCqc[d].reduce((m, v, k) => Math.max(m, v + Math.abs(dt[k]!)), 0)
         return {
           floorId: ids[f]!,
-          driftMax: r.driftMax,
-          driftAvg: r.driftAvg,
-          driftRatio: r.ratio,
-          driftIndex: h > 0 ? r.driftMax / h : 0,
+          driftMax,
+          driftAvg: best!.driftAvg,
+          driftRatio: best!.ratio,
+          driftIndex: h > 0 ? driftMax / h : 0,
+          governingSign: sign,
         }
       })
     accidentalTorsion = {
@@ -328,7 +341,7 @@ export function runSpectrumDetailed(
       excitationX: withX.map((p, i) => toResponse(ids[i]!, p)),
       excitationY: withY.map((p, i) => toResponse(ids[i]!, p)),
       combined: withX.map((p, i) => toResponse(ids[i]!, combinePeaks(p, withY[i]!, rule))),
-      stories: { x: stories('x', withX), y: stories('y', withY) },
+      stories: { x: stories('x', scaled.x), y: stories('y', scaled.y) },
     }
   }
 
