@@ -39,6 +39,7 @@ import type { FloorActions } from './FloorStack'
 import { floorOverlay } from './floorOverlay'
 import { useAnalysis } from './hooks/useAnalysis'
 import { useEditor, useEditorPick } from './hooks/useEditor'
+import { ElementForcesPanel } from './ElementForcesPanel'
 import { Inspector } from './Inspector'
 import type { InspectedKind } from './Inspector'
 import { PlanCanvas } from './PlanCanvas'
@@ -535,6 +536,9 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
               onCopyToFloors={onCopyToFloors}
               copyMessage={null}
             />
+          </ErrorBoundary>
+          <ErrorBoundary name="Element forces">
+            <ElementForcesPanel floors={doc.floors} result={viewerResult} selection={selection} units={units} isStale={viewerStale} />
           </ErrorBoundary>
           <ErrorBoundary name="Balance">
             <BalancePanel project={doc} onApply={onApplyBalance} />
