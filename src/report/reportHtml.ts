@@ -338,7 +338,8 @@ footer.closing { margin-top: 8mm; padding-top: 2mm; border-top: 2px solid var(--
  */
 export function buildReportHtml(project: Project, result: AnalysisResult, options: ReportOptions): string {
   const units = options.unitSystem
-  const tables = buildResultTables(project, result, units)
+  // The long every-case element table goes to CSV only; the report shows the walls' design case.
+  const tables = buildResultTables(project, result, units).filter((t) => t.id !== 'element-forces')
   const name = project.name.trim() === '' ? 'Untitled project' : project.name
   const when = formatTimestamp(options.generatedAt)
   return [

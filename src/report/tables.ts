@@ -46,6 +46,9 @@ export const TABLE_IDS = [
   'regularity',
   'spectrum-floors',
   'spectrum-base',
+  'spectrum-torsion',
+  'wall-forces',
+  'element-forces',
   'time-history',
 ] as const
 
@@ -366,9 +369,139 @@ function spectrumBaseTable(result: AnalysisResult, units: UnitSystem): ResultTab
     ['Y', q(s.baseShear.y.cqc, 'force'), q(s.baseShear.y.srss, 'force'), num(s.scaleByDirection?.y ?? s.scale)],
   ]
   const notes = [
-    `Total base shear for excitation along one axis; ${s.modeCount ?? result.modes?.count ?? 0} modes combined.`,
+    `Total base shear for excitation along one axis; ${s.modeCount ?? result.modes?.count ?? 0} modes combined${s.residual ? ' plus one residual rigid mode at 0.05 s for the rest of the mass (ASCE/SEI 7-16 12.9.1.1)' : ''}.`,
   ]
+  if (s.massRatio) {
+    notes.push(
+      `Effective mass combined: ${fmtPlain(100 * s.massRatio.x)}% (X), ${fmtPlain(100 * s.massRatio.y)}% (Y)${s.residual ? `, of which the residual mode ${fmtPlain(100 * s.residual.massRatio.x)}% (X), ${fmtPlain(100 * s.residual.massRatio.y)}% (Y)` : ''}${s.modeRule === 'ninety-percent' ? '; lowest modes to 90% of the mass (the 12.9.1.1 exception)' : ''}${s.modeSource === 'all-modes' ? '; all modes were solved for the spectrum' : ''}.`,
+    )
+  }
   return table('spectrum-base', 'Response spectrum: base shears', columns, rows, notes)
+}
+
+function spectrumTorsionTable(result: AnalysisResult, units: UnitSystem): ResultTable | null {
+  const at = result.spectrum?.accidentalTorsion
+  if (!at) return null
+  const { col, q } = helpers(units)
+  const names = new Map(result.floors.map((f) => [f.id, f]))
+  const columns = [
+    col('floor', 'floor'),
+    col('name', 'name'),
+    col('driftX', 'story drift X with torsion', 'displacement'),
+    col('ratioX', 'max/avg drift X'),
+    col('indexX', 'drift / height X'),
+    col('driftY', 'story drift Y with torsion', 'displacement'),
+    col('ratioY', 'max/avg drift Y'),
+    col('indexY', 'drift / height Y'),
+  ]
+  const rows = at.stories.x.map((rx, i): TableCell[] => {
+    const ry = at.stories.y[i]
+    const floor = names.get(rx.floorId)
+    return [
+      floor ? floor.index + 1 : null,
+      floor?.name ?? rx.floorId,
+      q(rx.driftMax, 'displacement'),
+      num(rx.driftRatio),
+      num(rx.driftIndex),
+      q(ry?.driftMax, 'displacement'),
+      num(ry?.driftRatio),
+      num(ry?.driftIndex),
+    ]
+  })
+  const notes = [
+    `Spectrum peaks plus static accidental torsion, envelope of +e and -e: floor torques = floor force x ${fmtPlain(100 * at.eccentricityFraction)}% of the plan extent across the load, floor forces from the equivalent-static vertical distribution (w z^k) scaled to the spectrum's CQC base shear (ASCE/SEI 7-16 12.9.1.5, from memory).`,
+    'Drift: peak + |torsion| at the worst slab outline corner; max/avg: per sign of e, the peak taken along the load plus the signed torsion drift, the sign with the larger ratio shown. Informative: the torsion verdicts come from the static cases. No amplification Ax applied.',
+  ]
+  return table('spectrum-torsion', 'Response spectrum with accidental torsion: story drifts', columns, rows, notes)
+}
+
+/** The element-force case shown in the report: the spectrum with accidental torsion when present. */
+function designCaseIndex(result: AnalysisResult): number {
+  const cases = result.elementForces?.cases ?? []
+  for (const id of ['spectrum+torsion', 'spectrum']) {
+    const i = cases.findIndex((c) => c.id === id)
+    if (i >= 0) return i
+  }
+  return -1
+}
+
+const KIND_WORDS = { wall: 'wall', frameLine: 'frame line', columnX: 'column local x', columnY: 'column local y' } as const
+
+function wallForcesTable(result: AnalysisResult, units: UnitSystem): ResultTable | null {
+  const ef = result.elementForces
+  const ci = designCaseIndex(result)
+  if (!ef || ci < 0) return null
+  const walls = ef.elements.filter((e) => e.kind === 'wall')
+  if (walls.length === 0) return null
+  const { col, q } = helpers(units)
+  const names = new Map(result.floors.map((f) => [f.id, f]))
+  const columns = [
+    col('wall', 'wall'),
+    col('floor', 'floor'),
+    col('name', 'story below'),
+    col('shear', 'story shear', 'force'),
+    col('share', 'share of story shear'),
+    col('moment', 'overturning moment', 'moment'),
+  ]
+  const rows: TableCell[][] = []
+  for (const w of walls) {
+    for (let k = w.floorIds.length - 1; k >= 0; k--) {
+      const floor = names.get(w.floorIds[k]!)
+      rows.push([
+        w.elementId,
+        floor ? floor.index + 1 : null,
+        floor?.name ?? w.floorIds[k]!,
+        q(w.shear[ci]?.[k], 'force'),
+        num(w.share[ci]?.[k]),
+        q(w.overturningMoment[ci]?.[k], 'moment'),
+      ])
+    }
+  }
+  const notes = [
+    `Case: ${ef.cases[ci]!.label}. Each wall's storey shear in its own plane (its nodal forces summed from the top down), its share of the storey shear along the load (along the wall's main axis for both directions combined; peaks need not add up to 100%), and its overturning moment at the bottom of the storey (storey shear x storey height summed from the top down). Formed per mode, then combined by CQC.`,
+    'Every case and every element (frame lines, columns) are in the element-forces CSV table.',
+  ]
+  return table('wall-forces', 'Walls: storey shears and overturning moments', columns, rows, notes)
+}
+
+function elementForcesTable(result: AnalysisResult, units: UnitSystem): ResultTable | null {
+  const ef = result.elementForces
+  if (!ef || ef.cases.length === 0) return null
+  const { col, q } = helpers(units)
+  const names = new Map(result.floors.map((f) => [f.id, f]))
+  const columns = [
+    col('element', 'element'),
+    col('kind', 'kind'),
+    col('case', 'case'),
+    col('floor', 'floor'),
+    col('name', 'story below'),
+    col('shear', 'story shear', 'force'),
+    col('share', 'share of story shear'),
+    col('moment', 'overturning moment', 'moment'),
+  ]
+  const rows: TableCell[][] = []
+  ef.cases.forEach((c, ci) => {
+    for (const e of ef.elements) {
+      for (let k = e.floorIds.length - 1; k >= 0; k--) {
+        const floor = names.get(e.floorIds[k]!)
+        rows.push([
+          e.elementId,
+          KIND_WORDS[e.kind],
+          c.id,
+          floor ? floor.index + 1 : null,
+          floor?.name ?? e.floorIds[k]!,
+          q(e.shear[ci]?.[k], 'force'),
+          num(e.share[ci]?.[k]),
+          q(e.overturningMoment[ci]?.[k], 'moment'),
+        ])
+      }
+    }
+  })
+  const notes = [
+    `Cases: ${ef.cases.map((c) => `${c.id} = ${c.label}`).join('; ')}.`,
+    'Static cases are signed; spectrum cases are peaks formed per mode and combined by CQC, then over directions; +torsion adds the static accidental torsion as the envelope of +e and -e.',
+  ]
+  return table('element-forces', 'Element storey shears and overturning moments, every case', columns, rows, notes)
 }
 
 function timeHistoryTable(result: AnalysisResult, units: UnitSystem): ResultTable | null {
@@ -460,6 +593,7 @@ export function buildResultTables(
     )
   }
   tables.push(spectrumFloorsTable(result, units), spectrumBaseTable(result, units))
+  tables.push(spectrumTorsionTable(result, units), wallForcesTable(result, units), elementForcesTable(result, units))
   tables.push(timeHistoryTable(result, units))
   return tables.filter((x): x is ResultTable => x !== null)
 }
