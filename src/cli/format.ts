@@ -270,6 +270,11 @@ function spectrumSection(result: AnalysisResult, units: UnitSystem): string {
         ['Y', showValue(s.baseShear.y.cqc, 'force', units), showValue(s.baseShear.y.srss, 'force', units)],
       ],
     ),
+    ...(s.massRatio
+      ? [
+          `${s.modeCount ?? 0} modes${s.residual ? ' + one residual rigid mode at 0.05 s' : ''}; effective mass combined ${pct(s.massRatio.x)} (X), ${pct(s.massRatio.y)} (Y)`,
+        ]
+      : []),
   ].join('\n')
 }
 
