@@ -13,6 +13,7 @@ import { runSpectrumDetailed } from '@/engine/spectrum'
 import { runStaticTorsion } from '@/engine/loads'
 import type { Structure } from '@/engine/results'
 import { expectRelClose } from '../helpers/approx'
+import { generateBuilding, transformProject } from '../helpers/generateBuilding'
 import { mixedModel, projectBuilder } from '../helpers/projectBuilder'
 
 /** Storey shear along `comp` (0 = x, 1 = y) of storey i from floor loads at O, top down. */
@@ -189,5 +190,31 @@ describe('element storey shears', () => {
     // and the accidental torsion envelope only adds
     const ti = ef.cases.findIndex((c) => c.id === 'spectrum-x+torsion')
     ef.elements[e]!.shear[ti]!.forEach((v, k) => expect(v).toBeGreaterThanOrEqual(shears[k]!))
+  })
+})
+
+describe('element forces and spectrum torsion under a move of the plan origin', () => {
+  it('do not depend on where the plan origin lies', () => {
+    // MODELING.md "Degrees of freedom": nothing shown to the user depends on where O lies.
+    const p = generateBuilding({ floors: 6, seed: 11, setback: true })
+    const a = analyzeProject(p)
+    const b = analyzeProject(transformProject(p, { dx: 350, dy: -120, angle: 0 }))
+    const ea = a.elementForces!
+    const eb = b.elementForces!
+    expect(eb.cases.map((c) => c.id)).toEqual(ea.cases.map((c) => c.id))
+    ea.elements.forEach((row, e) => {
+      const other = eb.elements[e]!
+      expect(other.elementId).toBe(row.elementId)
+      row.shear.forEach((values, ci) => {
+        let scale = 0
+        for (const v of values) scale = Math.max(scale, Math.abs(v))
+        values.forEach((v, k) => {
+          expect(Math.abs(other.shear[ci]![k]! - v)).toBeLessThanOrEqual(1e-6 * scale + 1e-9)
+        })
+      })
+    })
+    const ta = a.spectrum!.accidentalTorsion!.stories.x
+    const tb = b.spectrum!.accidentalTorsion!.stories.x
+    ta.forEach((s, i) => expectRelClose(tb[i]!.driftRatio, s.driftRatio, 1e-6))
   })
 })
