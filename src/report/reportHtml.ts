@@ -240,6 +240,15 @@ function methodHtml(result: AnalysisResult): string {
     'Modes solve the generalized symmetric eigenproblem K φ = ω² M φ; effective modal masses use the participation factors along X, Y and about the building centre of mass.',
     'Torsion checks apply equivalent static floor forces with the centre of mass moved by the accidental eccentricity, and compare the largest and average story drifts (and floor displacements) at the slab outline corners.',
     'Response spectrum peaks combine modes by CQC (Der Kiureghian 1981 correlation coefficients) and the two horizontal directions by SRSS or the 100%/30% rule.',
+    ...(result.spectrum?.residual
+      ? ['The spectrum combines every mode with a period of at least 0.05 s plus one residual rigid mode at 0.05 s carrying the rest of the mass, so 100% of the mass is included (ASCE/SEI 7-16 12.9.1.1).']
+      : []),
+    ...(result.spectrum?.accidentalTorsion
+      ? ['Accidental torsion is added to spectrum results as static floor torques (floor force x accidental eccentricity, forces from the equivalent-static distribution scaled to the spectrum base shear), the envelope of +e and -e.']
+      : []),
+    ...(result.elementForces
+      ? ['Element storey shears are the element nodal forces summed from the top down; overturning moments sum storey shear x storey height from the top down; for the spectrum both are formed per mode before combining.']
+      : []),
     ...(result.timeHistory ? ['The time history integrates the modal equations by the Newmark average-acceleration method.'] : []),
   ]
   return [
