@@ -49,6 +49,7 @@ import { downloadProject, readProjectText } from './projectFile'
 import { formatQuantity, fromDisplay } from './quantities'
 import { ResultsPanel } from './ResultsPanel'
 import { StatusLine } from './StatusLine'
+import { WorkerNotice } from './WorkerNotice'
 
 export interface AppProps {
   readonly store: EditorStore
@@ -440,6 +441,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
           )}
         </div>
       ) : null}
+      <WorkerNotice client={analysis} />
       <div className="workspace">
         <aside className="side">
           <ErrorBoundary name="Floors">

@@ -14,7 +14,9 @@ interface Props {
 export function StatusLine({ analysis, message, autosavedAt, floorLabel, toolLabel, selectionCount }: Props) {
   const state = analysis.error
     ? 'failed'
-    : analysis.isStale
+    : analysis.isStale && analysis.stoppedRevision !== null
+      ? 'stopped'
+      : analysis.isStale
       ? 'stale'
       : analysis.result
         ? 'current'
@@ -22,7 +24,9 @@ export function StatusLine({ analysis, message, autosavedAt, floorLabel, toolLab
   const text =
     state === 'failed'
       ? `Analysis failed: ${analysis.error ?? ''}`
-      : state === 'stale'
+      : state === 'stopped'
+        ? 'Analysis stopped: results not current'
+        : state === 'stale'
         ? 'Analysis updating…'
         : state === 'current'
           ? `Analysis current (rev ${analysis.resultRevision ?? '-'}, ${analysis.lastWorkerMs?.toFixed(0) ?? '-'} ms${analysis.inWorker ? '' : ', main thread'})`
