@@ -5,13 +5,15 @@ interface Props {
   readonly analysis: AnalysisState
   readonly message: string | null
   readonly autosavedAt: string | null
+  /** Short autosave problem ("FAILED"); shown instead of any earlier save time. */
+  readonly autosaveProblem?: string | null
   readonly floorLabel: string
   readonly toolLabel: string
   readonly selectionCount: number
 }
 
 /** One line at the bottom: tool, floor, selection, analysis state, autosave, and the short caution. */
-export function StatusLine({ analysis, message, autosavedAt, floorLabel, toolLabel, selectionCount }: Props) {
+export function StatusLine({ analysis, message, autosavedAt, autosaveProblem = null, floorLabel, toolLabel, selectionCount }: Props) {
   const state = analysis.error
     ? 'failed'
     : analysis.isStale && analysis.stoppedRevision !== null
@@ -39,7 +41,9 @@ export function StatusLine({ analysis, message, autosavedAt, floorLabel, toolLab
       <span className={state} data-testid="analysis-state" data-state={state}>
         {text}
       </span>
-      <span data-testid="autosave-state">{autosavedAt ? `autosaved ${autosavedAt.slice(11, 19)}` : 'not yet autosaved'}</span>
+      <span data-testid="autosave-state" data-state={autosaveProblem ? 'problem' : autosavedAt ? 'saved' : 'none'} className={autosaveProblem ? 'failed' : undefined}>
+        {autosaveProblem ? `autosave ${autosaveProblem}` : autosavedAt ? `autosaved ${autosavedAt.slice(11, 19)}` : 'not yet autosaved'}
+      </span>
       {message ? <span data-testid="status-message">{message}</span> : null}
       <span className="caution" title={CAUTION}>
         {CAUTION_SHORT}
