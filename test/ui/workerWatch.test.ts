@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest'
+import { describe, expect, it, vi } from 'vitest'
 import { analysisGraceMs, createWorkerWatch, retryAllowed } from '@/ui/workerWatch'
 import type { WatchableWorker } from '@/ui/workerWatch'
 import { fakeTimers } from '../helpers/fakeTimers'
@@ -96,6 +96,7 @@ describe('createWorkerWatch', () => {
   })
 
   it('reports no worker when the factory throws', () => {
+    const warn = vi.spyOn(console, 'warn').mockImplementation(() => undefined)
     const watch = createWorkerWatch<string, string>({
       label: 'test',
       create: () => {
@@ -106,6 +107,8 @@ describe('createWorkerWatch', () => {
       onSlow: () => undefined,
     })
     expect(watch.hasWorker()).toBe(false)
+    expect(warn).toHaveBeenCalledTimes(1)
+    warn.mockRestore()
   })
 })
 
