@@ -31,13 +31,14 @@ import type { ViewerPaneProps } from '@/viewer'
 import { ACTIONS, actionForKey } from './actions'
 import type { Action, ActionContext } from './actions'
 import type { AnalysisClient, AnalysisState } from './analysisClient'
-import { createAutosaver } from './autosave'
+import type { AutosaveService } from './autosave'
 import { blankProject } from './blankProject'
 import { ErrorBoundary } from './ErrorBoundary'
 import { FloorStack } from './FloorStack'
 import type { FloorActions } from './FloorStack'
 import { floorOverlay } from './floorOverlay'
 import { useAnalysis } from './hooks/useAnalysis'
+import { useAutosave } from './hooks/useAutosave'
 import { useEditor, useEditorPick } from './hooks/useEditor'
 import { ElementForcesPanel } from './ElementForcesPanel'
 import { Inspector } from './Inspector'
@@ -49,7 +50,9 @@ import { ProblemsPanel } from './ProblemsPanel'
 import { downloadProject, readProjectText } from './projectFile'
 import { formatQuantity, fromDisplay } from './quantities'
 import { ResultsPanel } from './ResultsPanel'
+import { SaveNotice } from './SaveNotice'
 import { StatusLine } from './StatusLine'
+import { WorkerNotice } from './WorkerNotice'
 
 export interface AppProps {
   readonly store: EditorStore
@@ -58,6 +61,8 @@ export interface AppProps {
   readonly startupNotice?: string | null
   /** Initial 3D viewer settings (e.g. animation paused for tests and benchmarks). */
   readonly viewerInitial?: ViewerPaneProps['initial']
+  /** Where autosave writes (none: no autosave, e.g. in tests). */
+  readonly autosave?: AutosaveService | null
 }
 
 interface Banner {
@@ -110,7 +115,7 @@ function previewOf(draft: Draft | null, wallThickness: number): PlanPreview[] {
   }
 }
 
-export function App({ store, analysis, startupNotice = null, viewerInitial }: AppProps) {
+export function App({ store, analysis, startupNotice = null, viewerInitial, autosave = null }: AppProps) {
   const doc = useEditor(store, (s) => s.doc)
   const revision = useEditor(store, (s) => s.revision)
   const floorId = useEditor(store, (s) => s.currentFloor)
@@ -129,39 +134,18 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
   const [withMotion, setWithMotion] = useState(false)
   const [fitRequest, setFitRequest] = useState(0)
   const [banner, setBanner] = useState<Banner | null>(startupNotice ? { kind: 'info', title: startupNotice, lines: [] } : null)
-  const [autosavedAt, setAutosavedAt] = useState<string | null>(null)
   const [statusNote, setStatusNote] = useState<string | null>(null)
   const [numericText, setNumericText] = useState('')
   const [viewScale, setViewScale] = useState(20)
   const onViewChange = useCallback((v: { scale: number }) => setViewScale(v.scale), [])
   const fileInput = useRef<HTMLInputElement>(null)
 
-  // Analysis on every revision (latest wins in the client) and debounced autosave.
-  const autosaver = useMemo(
-    () =>
-      createAutosaver(400, (r) => {
-        if (r.ok) setAutosavedAt(r.savedAt)
-        else setStatusNote(r.error)
-      }),
-    [],
-  )
+  // Analysis on every revision (latest wins in the client); debounced autosave with its unload guard.
+  const saving = useAutosave(store, autosave)
+  const { markFileSaved } = saving
   useEffect(() => {
     analysis.request(revision, doc, withMotion ? { timeHistory: true } : undefined)
   }, [analysis, revision, doc, withMotion])
-  const firstRevision = useRef(revision)
-  useEffect(() => {
-    if (revision !== firstRevision.current) autosaver.schedule(doc)
-  }, [autosaver, revision, doc])
-  useEffect(() => {
-    const flush = (): void => autosaver.flush()
-    window.addEventListener('beforeunload', flush)
-    window.addEventListener('pagehide', flush)
-    return () => {
-      window.removeEventListener('beforeunload', flush)
-      window.removeEventListener('pagehide', flush)
-      autosaver.flush()
-    }
-  }, [autosaver])
 
   useEffect(() => {
     try {
@@ -174,8 +158,9 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
   const openFile = useCallback(() => fileInput.current?.click(), [])
   const saveFile = useCallback(() => {
     const name = downloadProject(store.getState().doc)
+    markFileSaved()
     setStatusNote(`Saved ${name}`)
-  }, [store])
+  }, [store, markFileSaved])
   const [replaceWith, setReplaceWith] = useState<'demo' | 'blank'>('demo')
   const startFromDemo = useCallback(() => {
     setReplaceWith('demo')
@@ -441,6 +426,8 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
           )}
         </div>
       ) : null}
+      <WorkerNotice client={analysis} />
+      <SaveNotice status={saving.status} />
       <div className="workspace">
         <aside className="side">
           <ErrorBoundary name="Floors">
@@ -551,7 +538,8 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
       <StatusLine
         analysis={state}
         message={message ?? statusNote}
-        autosavedAt={autosavedAt}
+        autosavedAt={saving.status.kind === 'saved' ? saving.status.lastSavedAt : null}
+        autosaveProblem={saving.status.kind === 'failed' ? 'FAILED' : saving.status.kind === 'fallback' ? 'emergency copy only' : null}
         floorLabel={floor ? `Floor ${floorNumber} of ${doc.floors.length}` : ''}
         toolLabel={`${ACTIONS.find((a) => a.tool === tool.id)?.label ?? tool.id} · ${tool.state}`}
         selectionCount={selection.length}

@@ -5,16 +5,20 @@ interface Props {
   readonly analysis: AnalysisState
   readonly message: string | null
   readonly autosavedAt: string | null
+  /** Short autosave problem ("FAILED"); shown instead of any earlier save time. */
+  readonly autosaveProblem?: string | null
   readonly floorLabel: string
   readonly toolLabel: string
   readonly selectionCount: number
 }
 
 /** One line at the bottom: tool, floor, selection, analysis state, autosave, and the short caution. */
-export function StatusLine({ analysis, message, autosavedAt, floorLabel, toolLabel, selectionCount }: Props) {
+export function StatusLine({ analysis, message, autosavedAt, autosaveProblem = null, floorLabel, toolLabel, selectionCount }: Props) {
   const state = analysis.error
     ? 'failed'
-    : analysis.isStale
+    : analysis.isStale && analysis.stoppedRevision !== null
+      ? 'stopped'
+      : analysis.isStale
       ? 'stale'
       : analysis.result
         ? 'current'
@@ -22,7 +26,9 @@ export function StatusLine({ analysis, message, autosavedAt, floorLabel, toolLab
   const text =
     state === 'failed'
       ? `Analysis failed: ${analysis.error ?? ''}`
-      : state === 'stale'
+      : state === 'stopped'
+        ? 'Analysis stopped: results not current'
+        : state === 'stale'
         ? 'Analysis updating…'
         : state === 'current'
           ? `Analysis current (rev ${analysis.resultRevision ?? '-'}, ${analysis.lastWorkerMs?.toFixed(0) ?? '-'} ms${analysis.inWorker ? '' : ', main thread'})`
@@ -35,7 +41,9 @@ export function StatusLine({ analysis, message, autosavedAt, floorLabel, toolLab
       <span className={state} data-testid="analysis-state" data-state={state}>
         {text}
       </span>
-      <span data-testid="autosave-state">{autosavedAt ? `autosaved ${autosavedAt.slice(11, 19)}` : 'not yet autosaved'}</span>
+      <span data-testid="autosave-state" data-state={autosaveProblem ? 'problem' : autosavedAt ? 'saved' : 'none'} className={autosaveProblem ? 'failed' : undefined}>
+        {autosaveProblem ? `autosave ${autosaveProblem}` : autosavedAt ? `autosaved ${autosavedAt.slice(11, 19)}` : 'not yet autosaved'}
+      </span>
       {message ? <span data-testid="status-message">{message}</span> : null}
       <span className="caution" title={CAUTION}>
         {CAUTION_SHORT}

@@ -35,6 +35,12 @@ export interface BalancePanelViewProps {
   readonly inWorker: boolean
   readonly onFind: () => void
   readonly onApply: (suggestion: BalanceSuggestion, index: number) => void
+  /** Stop the running search (shown beside the working state when given). */
+  readonly onStop?: () => void
+  /** The last worker fault, if any (the worker was restarted). */
+  readonly fault?: string | null
+  /** True when the search passed its grace period without an answer. */
+  readonly slow?: boolean
 }
 
 const n3 = (v: number | null): string => (v === null ? '–' : formatNumber(v, 3))
@@ -52,7 +58,7 @@ function BeforeAfter({ before, after }: { before: number | null; after: number |
 
 /** The panel's markup for a given state (pure; the stateful BalancePanel wraps it). */
 export function BalancePanelView(props: BalancePanelViewProps) {
-  const { phase, result, error, elapsedS, isStale, inWorker, onFind, onApply } = props
+  const { phase, result, error, elapsedS, isStale, inWorker, onFind, onApply, onStop, fault = null, slow = false } = props
   const working = phase === 'working'
   const suggestions = result?.suggestions ?? []
   return (
@@ -70,7 +76,20 @@ export function BalancePanelView(props: BalancePanelViewProps) {
       {working ? (
         <p className="gx-working" role="status" data-testid="balance-working">
           <progress aria-label="Searching for changes" /> Trying changes
-          {inWorker ? '' : ' (on the main thread)'}… {elapsedS} s
+          {inWorker ? '' : ' (on the main thread)'}… {slow ? `still searching (${elapsedS} s)` : `${elapsedS} s`}
+          {onStop && inWorker ? (
+            <>
+              {' '}
+              <button type="button" data-testid="balance-stop" onClick={onStop}>
+                Stop
+              </button>
+            </>
+          ) : null}
+        </p>
+      ) : null}
+      {fault ? (
+        <p className="gx-error" role="alert" data-testid="balance-fault">
+          {fault}
         </p>
       ) : null}
       {phase === 'error' && error ? (
@@ -145,11 +164,19 @@ export function BalancePanel({ project, onApply, options, createRunner }: Balanc
   const [startedAt, setStartedAt] = useState(0)
   const [elapsedS, setElapsedS] = useState(0)
   const [inWorker, setInWorker] = useState(true)
+  const [fault, setFault] = useState<string | null>(null)
+  const [slow, setSlow] = useState(false)
 
   useEffect(() => {
     const make =
       factoryRef.current ??
-      (() => createBalanceRunner({ createWorker: createBalanceWorker, suggest: suggestBalance }))
+      (() =>
+        createBalanceRunner({
+          createWorker: createBalanceWorker,
+          suggest: suggestBalance,
+          onFault: (reason, retried) => setFault(retried ? `${reason}. Restarted it and searching again.` : `${reason}. Restarted it.`),
+          onSlow: () => setSlow(true),
+        }))
     const runner = make()
     runnerRef.current = runner
     setInWorker(runner.inWorker)
@@ -171,6 +198,8 @@ export function BalancePanel({ project, onApply, options, createRunner }: Balanc
     const snapshot = project
     setPhase('working')
     setError(null)
+    setFault(null)
+    setSlow(false)
     setStartedAt(Date.now())
     setElapsedS(0)
     runner.run(snapshot, options ?? {}).then(
@@ -197,6 +226,13 @@ export function BalancePanel({ project, onApply, options, createRunner }: Balanc
       inWorker={inWorker}
       onFind={find}
       onApply={(s) => onApply(s.element)}
+      onStop={() => {
+        runnerRef.current?.stop()
+        setSlow(false)
+        setPhase(result ? 'done' : 'idle')
+      }}
+      fault={fault}
+      slow={slow}
     />
   )
 }

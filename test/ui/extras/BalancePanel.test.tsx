@@ -14,6 +14,8 @@ const noop = (): void => {}
 const stubRunner = (): BalanceRunner => ({
   inWorker: true,
   run: () => new Promise(() => {}),
+  stop: noop,
+  debug: { crash: noop, freeze: noop },
   dispose: noop,
 })
 

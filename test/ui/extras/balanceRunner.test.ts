@@ -13,7 +13,7 @@ function fakeWorker() {
   let terminated = false
   const worker: BalanceWorkerLike = {
     postMessage: (m) => {
-      sent.push(m)
+      sent.push(m as BalanceRequest)
     },
     terminate: () => {
       terminated = true
@@ -80,6 +80,61 @@ describe('createBalanceRunner', () => {
     const fixes = result.suggestions.slice(0, 2).map((s) => s.description)
     expect(fixes.some((d) => d.includes("'West line' 2.50 m towards +x (to x = 2.50 m)"))).toBe(true)
     expect(fixes.some((d) => d.includes("'East line' to x2.00"))).toBe(true)
+  })
+})
+
+describe('createBalanceRunner with a failing worker', () => {
+  const factory = () => {
+    const made: ReturnType<typeof fakeWorker>[] = []
+    const create = (): BalanceWorkerLike => {
+      const fake = fakeWorker()
+      made.push(fake)
+      return fake.worker
+    }
+    return { made, create, newest: () => made[made.length - 1] as ReturnType<typeof fakeWorker> }
+  }
+
+  it('restarts a crashed worker and sends the running search again', async () => {
+    const workers = factory()
+    const faults: string[] = []
+    const runner = createBalanceRunner({
+      createWorker: workers.create,
+      suggest: suggestBalance,
+      onFault: (reason, retried) => faults.push(`${retried} ${reason}`),
+    })
+    const project = boxProject()
+    const p = runner.run(project)
+    workers.newest().worker.onerror?.({ message: 'gone' } as ErrorEvent)
+    expect(workers.made).toHaveLength(2)
+    expect(workers.made[0]?.isTerminated()).toBe(true)
+    expect(faults).toEqual(['true [balance] the worker stopped: gone'])
+    const resent = workers.newest().sent[0]
+    expect(resent?.project).toBe(project)
+    const result = fakeBalance(project)
+    workers.newest().answer({ id: resent?.id ?? -1, ok: true, result, workerMs: 1 })
+    await expect(p).resolves.toBe(result)
+  })
+
+  it('rejects the search when it kills the worker a second time', async () => {
+    const workers = factory()
+    const runner = createBalanceRunner({ createWorker: workers.create, suggest: suggestBalance })
+    const p = runner.run(boxProject())
+    workers.newest().worker.onerror?.({ message: 'one' } as ErrorEvent)
+    workers.newest().worker.onmessageerror?.({} as MessageEvent)
+    await expect(p).rejects.toThrow('not retried')
+    expect(workers.newest().sent).toEqual([])
+  })
+
+  it('stops a long search: the promise is cancelled and a fresh worker takes the next one', async () => {
+    const workers = factory()
+    const runner = createBalanceRunner({ createWorker: workers.create, suggest: suggestBalance })
+    const p = runner.run(boxProject())
+    runner.stop()
+    await expect(p).rejects.toBeInstanceOf(BalanceCancelled)
+    expect(workers.made[0]?.isTerminated()).toBe(true)
+    void runner.run(boxProject()).catch(() => undefined)
+    expect(workers.newest().sent).toHaveLength(1)
+    expect(workers.made).toHaveLength(2)
   })
 })
 
