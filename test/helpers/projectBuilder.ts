@@ -255,7 +255,8 @@ export function projectBuilder(options: ProjectBuilderOptions = {}): ProjectBuil
         Iy: o.Iy ?? 0.0052,
         material: o.material ?? 'concrete',
         fixity: o.fixity ?? 'fixed',
-        ...(o.stiffnessFactor !== undefined ? { stiffnessFactor: o.stiffnessFactor } : {}),
+        // gross section unless a test says otherwise (the model default is the ACI 0.70)
+        stiffnessFactor: o.stiffnessFactor ?? 1,
         base: o.base ?? 'ground',
         top: o.top ?? topId(),
       } as Column
