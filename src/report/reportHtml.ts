@@ -9,6 +9,7 @@ import { CAUTION, CAUTION_SHORT, formatNumber, formatQuantity, toDisplay, unitLa
 import type { Project, UnitSystem } from '@/model'
 import { cssString, escapeHtml } from './escape'
 import { distinctPlans, planSketchSvg } from './planSketch'
+import { stiffnessFactorsHtml } from './stiffnessFactors'
 import { buildResultTables, describeSpectrum, verdictText } from './tables'
 import type { ResultTable, TableCell } from './tables'
 
@@ -161,6 +162,7 @@ function summaryHtml(project: Project, result: AnalysisResult, units: UnitSystem
     '</div></div>',
     '<h3>Materials</h3>',
     matTable,
+    stiffnessFactorsHtml(project),
     verdicts.length === 0
       ? ''
       : `<h3>Overall verdicts</h3><ul class="verdicts">${verdicts.map((v) => `<li>${esc(v)}</li>`).join('')}</ul><p class="inline-caution">${esc(CAUTION)}</p>`,
