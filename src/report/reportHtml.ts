@@ -4,6 +4,7 @@
  * The caution stands in a box at the top, in the running footer of every printed page (CSS page
  * margin box), in a repeated header row of every table, and in the closing footer.
  */
+import { scopeLine } from '@/engine'
 import type { AnalysisResult, BalanceResult, CriterionEvaluation, Issue } from '@/engine'
 import { CAUTION, CAUTION_SHORT, formatNumber, formatQuantity, toDisplay, unitLabel } from '@/model'
 import type { Project, UnitSystem } from '@/model'
@@ -150,7 +151,11 @@ function summaryHtml(project: Project, result: AnalysisResult, units: UnitSystem
     verdicts.push(`Torsion check (${result.torsion.criterion.setName}): ${verdictText(result.torsion.criterion.overall)}`)
   }
   if (result.regularity) {
-    verdicts.push(`Plan regularity (${result.regularity.setName}): ${verdictText(result.regularity.overall)}`)
+    const scope = scopeLine(result.regularity)
+    verdicts.push(
+      `Plan regularity (${result.regularity.setName}): ${verdictText(result.regularity.overall)}` +
+        (scope ? ` for the conditions checked only. ${scope}` : ''),
+    )
   }
   return [
     '<section class="sheet first" id="summary">',
