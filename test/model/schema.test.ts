@@ -63,6 +63,30 @@ describe('parseProject', () => {
     ])
   })
 
+  it('reads the version-2 frame and column fields and names the path of a bad one', () => {
+    const doc = copy(corner)
+    setPath(doc, 'frameLines.mf-south.stiffness.baseFixity', 'pinned')
+    setPath(doc, 'frameLines.mf-south.stiffness.beamFactor', 0.5)
+    setPath(doc, 'frameLines.mf-south.stiffness.stories', { L2: { columnI: 0.009 } })
+    setPath(doc, 'columns.c1.restraint', 0.4)
+    const { project, warnings } = projectOf(doc)
+    expect(warnings).toEqual([])
+    expect(project.frameLines['mf-south']?.stiffness).toMatchObject({
+      baseFixity: 'pinned',
+      beamFactor: 0.5,
+      stories: { L2: { columnI: 0.009 } },
+    })
+    expect(project.frameLines['mf-south']?.stiffness).not.toHaveProperty('columnFactor')
+    expect(project.columns.c1?.restraint).toBe(0.4)
+    setPath(doc, 'frameLines.mf-south.stiffness.baseFixity', 'hinged')
+    setPath(doc, 'frameLines.mf-south.stiffness.stories', { L2: { beamI: -1 } })
+    setPath(doc, 'columns.c1.restraint', 1.5)
+    const errors = errorsOf(doc)
+    expect(errors).toContain('frameLines.mf-south.stiffness.stories.L2.beamI: must be > 0, got -1')
+    expect(errors).toContain('columns.c1.restraint: must be <= 1, got 1.5')
+    expect(errors.some((e) => e.startsWith('frameLines.mf-south.stiffness.baseFixity:'))).toBe(true)
+  })
+
   it('collects every error of a file instead of stopping at the first', () => {
     const doc = copy(corner)
     setPath(doc, 'materials.concrete.E', 0)
