@@ -44,12 +44,15 @@ function bandCholesky(a: Float64Array, n: number, b: number): boolean {
   return true
 }
 
-/** Solve L L' x = y in place with the band factor from bandCholesky. */
-function bandSolve(a: Float64Array, n: number, b: number, y: Float64Array): void {
+/**
+ * Solve L L' x = y in place with the band factor from bandCholesky; y[0..start-1] must be zero (the
+ * forward sweep starts at `start`, since L is lower triangular).
+ */
+function bandSolve(a: Float64Array, n: number, b: number, y: Float64Array, start = 0): void {
   const w = b + 1
-  for (let i = 0; i < n; i++) {
+  for (let i = start; i < n; i++) {
     let s = y[i]!
-    for (let k = Math.max(0, i - b); k < i; k++) s -= a[i * w + b - (i - k)]! * y[k]!
+    for (let k = Math.max(start, i - b); k < i; k++) s -= a[i * w + b - (i - k)]! * y[k]!
     y[i] = s / a[i * w + b]!
   }
   for (let i = n - 1; i >= 0; i--) {
@@ -102,6 +105,12 @@ export function momentFrameStiffness(
   const Kuu = new Float64Array(n * n)
   // K_uθ as sparse lists per rotation: (floor index, value); at most 2 per column element end
   const Kut: { u: number; v: number }[][] = Array.from({ length: N }, () => [])
+  // the same entries by floor: the right-hand side K_θu[:, floor] has only these non-zeros
+  const byFloor: { r: number; v: number }[][] = Array.from({ length: n }, () => [])
+  const link = (r: number, u: number, v: number): void => {
+    Kut[r]!.push({ u, v })
+    byFloor[u]!.push({ r, v })
+  }
   for (let s = 0; s < n; s++) {
     const { h, EIc, EIb } = stories[s]!
     const a = (12 * EIc) / (h * h * h)
@@ -119,14 +128,14 @@ export function momentFrameStiffness(
     for (let j = 0; j < m; j++) {
       const top = rot(s + 1, j)
       addA(top, top, d)
-      Kut[top]!.push({ u: above, v: -c })
-      if (below >= 0) Kut[top]!.push({ u: below, v: c })
+      link(top, above, -c)
+      if (below >= 0) link(top, below, c)
       if (s > 0 || pinned) {
         const bot = rot(s, j)
         addA(bot, bot, d)
         addA(top, bot, e)
-        Kut[bot]!.push({ u: above, v: -c })
-        if (below >= 0) Kut[bot]!.push({ u: below, v: c })
+        link(bot, above, -c)
+        if (below >= 0) link(bot, below, c)
       }
     }
     // beams at the floor on top of story s (level s + 1)
@@ -146,10 +155,12 @@ export function momentFrameStiffness(
   const y = new Float64Array(N)
   for (let col = 0; col < n; col++) {
     y.fill(0)
-    for (let r = 0; r < N; r++) {
-      for (const t of Kut[r]!) if (t.u === col) y[r] = y[r]! + t.v
+    let first = N
+    for (const t of byFloor[col]!) {
+      y[t.r] = y[t.r]! + t.v
+      first = Math.min(first, t.r)
     }
-    bandSolve(A, N, band, y)
+    bandSolve(A, N, band, y, first)
     for (let r = 0; r < N; r++) {
       const x = y[r]!
       if (x === 0) continue
