@@ -1,5 +1,6 @@
 import { Matrix, inverse, solve } from 'ml-matrix'
 import { describe, expect, it } from 'vitest'
+import { scaleFrame } from '@/engine/balance'
 import { buildFrameLineElement } from '@/engine/elements/frameLine'
 import { momentFrameStiffness } from '@/engine/elements/momentFrame'
 import type { MomentFrameStory } from '@/engine/elements/momentFrame'
@@ -228,5 +229,32 @@ describe('buildFrameLineElement (moment frame)', () => {
     const { element, issues } = buildFrameLineElement(p, p.frameLines.m as FrameLine)
     expect(element).toBeNull()
     expect(issues[0]?.message).toContain('L2')
+  })
+})
+
+describe('scaleFrame (balance assistant) on a moment frame', () => {
+  it('scales per-story overrides too, so the condensed stiffness scales by exactly f', () => {
+    // linear algebra: K_uu - K_uθ K_θθ⁻¹ K_θu is homogeneous of degree 1 in the member E·I
+    const p = projectBuilder({ floors: 3 })
+      .frameLine({
+        id: 'm',
+        p1: { x: 0, y: 0 },
+        p2: { x: 12, y: 0 },
+        stiffness: {
+          kind: 'moment',
+          bays: 2,
+          bayWidth: 6,
+          columnI: 0.0054,
+          beamI: 0.0081,
+          material: 'concrete',
+          stories: { L3: { columnI: 0.003, beamI: 0.004 } },
+        },
+      })
+      .build()
+    const frame = p.frameLines.m as FrameLine
+    const K = buildFrameLineElement(p, frame).element!.stiffness
+    const scaled = { ...frame, stiffness: scaleFrame(frame.stiffness, 1.5) }
+    const K2 = buildFrameLineElement(p, scaled).element!.stiffness
+    expectArrayRelClose(K2, Array.from(K, (v) => 1.5 * v), 1e-12)
   })
 })
