@@ -32,6 +32,7 @@ import type {
   Wall,
   WallStoryOverride,
 } from '@/model'
+import { CURRENT_VERSION } from '@/model'
 
 /** Floors: a count (equal heights) or explicit descriptions bottom to top. */
 export type FloorSpec =
@@ -298,7 +299,7 @@ export function projectBuilder(options: ProjectBuilderOptions = {}): ProjectBuil
     build() {
       return structuredClone({
         format: 'gyre-project',
-        version: 1,
+        version: CURRENT_VERSION,
         name: options.name ?? 'Test project',
         floors,
         materials,

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import type { FloorId } from '@/model'
+import type { FloorId, MaterialId } from '@/model'
 import { createTestEditor } from '../../helpers/createTestEditor'
 import { checkCancel, checkDoUndoRedo, checkRefused } from './checklist'
 
@@ -45,7 +45,7 @@ describe('updateElement', () => {
 
   it('refuses a moment frame with a bad base fixity, factor or per-story I, naming the field', () => {
     const store = createTestEditor()
-    const moment = { kind: 'moment', bays: 2, bayWidth: 6, columnI: 0.005, beamI: 0.006, material: 'concrete' } as const
+    const moment = { kind: 'moment', bays: 2, bayWidth: 6, columnI: 0.005, beamI: 0.006, material: 'concrete' as MaterialId } as const
     checkDoUndoRedo(store, 'updateElement', { id: 'f1', patch: { stiffness: { ...moment, baseFixity: 'pinned', beamFactor: 0.5 } } }, (doc) => {
       expect(doc.frameLines.f1?.stiffness).toMatchObject({ kind: 'moment', baseFixity: 'pinned', beamFactor: 0.5 })
     })
