@@ -11,6 +11,7 @@ import type {
   StaticTorsionResult,
   Verdict,
 } from '@/engine'
+import { scopeLine } from '@/engine'
 import { CAUTION, formatNumber, toDisplay, unitLabel } from '@/model'
 import type { Quantity, UnitSystem } from '@/model'
 
@@ -246,7 +247,8 @@ function regularitySection(result: AnalysisResult): string {
     `  ${criterionHeader(r)}`,
     ...(r.notes ?? []).map((n) => `  note: ${n}`),
     checksTable(r.rows, result),
-    `Overall: ${verdictText(r.overall)} (${r.caution})`,
+    `Overall: ${verdictText(r.overall)}${scopeLine(r) ? ' for the conditions checked only' : ''} (${r.caution})`,
+    ...(scopeLine(r) ? [`  ${scopeLine(r)}`] : []),
   ].join('\n')
 }
 

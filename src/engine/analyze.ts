@@ -6,6 +6,7 @@ import { CAUTION } from '@/model'
 import type { Project } from '@/model'
 import { buildStructure } from './assemble'
 import { computeCentres } from './centres'
+import { centreDefinitionIssues } from './centreDefinition'
 import { evaluateRegularity, resolveCriterionSet } from './criteria'
 import { runStaticTorsion } from './loads'
 import { solveModes } from './modal'
@@ -89,6 +90,7 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
   }
   lap('modes')
   const centres = computeCentres(structure, solver.solver)
+  issues.push(...centreDefinitionIssues(project))
   lap('centres')
 
   const criterion = resolveCriterionSet(project.settings, options.criterionSet)

@@ -156,7 +156,13 @@ function reach(p: Point, v: Point, box: { minX: number; maxX: number; minY: numb
 
 const shift = (p: Point, v: Point, t: number): Point => ({ x: p.x + v.x * t, y: p.y + v.y * t })
 
-function scaleFrame(stiffness: FrameStiffness, f: number): FrameStiffness {
+/**
+ * A frame line's stiffness description scaled by f: direct story stiffness (with per-story values),
+ * moment-frame column and beam I (with per-story overrides, so the condensed matrix scales by exactly
+ * f), or brace area.
+ * @see docs/balance.md (what each action changes)
+ */
+export function scaleFrame(stiffness: FrameStiffness, f: number): FrameStiffness {
   switch (stiffness.kind) {
     case 'direct': {
       const stories = stiffness.stories
@@ -166,8 +172,20 @@ function scaleFrame(stiffness: FrameStiffness, f: number): FrameStiffness {
         ? { ...stiffness, storyStiffness: stiffness.storyStiffness * f, stories }
         : { ...stiffness, storyStiffness: stiffness.storyStiffness * f }
     }
-    case 'moment':
-      return { ...stiffness, columnI: stiffness.columnI * f, beamI: stiffness.beamI * f }
+    case 'moment': {
+      const scaled = { ...stiffness, columnI: stiffness.columnI * f, beamI: stiffness.beamI * f }
+      if (!stiffness.stories) return scaled
+      const stories = Object.fromEntries(
+        Object.entries(stiffness.stories).map(([k, o]) => [
+          k,
+          {
+            ...(o.columnI !== undefined ? { columnI: o.columnI * f } : {}),
+            ...(o.beamI !== undefined ? { beamI: o.beamI * f } : {}),
+          },
+        ]),
+      )
+      return { ...scaled, stories }
+    }
     case 'braced':
       return { ...stiffness, braceArea: stiffness.braceArea * f }
     default: {

@@ -5,7 +5,8 @@
  */
 export { analyzeProject } from './analyze'
 export { balanceScore, suggestBalance } from './balance'
-export { BUILT_IN_CRITERION_SETS } from './criteria'
+export { BUILT_IN_CRITERION_SETS, scopeLine } from './criteria'
+export { centreDefinitionIssues } from './centreDefinition'
 export type { BuiltInCriterionSet } from './criteria'
 export { GRAVITY, spectralAcceleration } from './spectra'
 export type { BalanceAction, BalanceOptions, BalanceResult, BalanceSuggestion } from './balance'
@@ -16,6 +17,7 @@ export type {
   AssembledElement,
   CheckRow,
   CriterionEvaluation,
+  CriterionScope,
   ElementForceCase,
   ElementForceRow,
   ElementForcesResult,

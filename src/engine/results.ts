@@ -26,6 +26,8 @@ export type IssueCode =
   | 'eigen-incomplete'
   | 'criterion-unknown'
   | 'not-applicable'
+  /** info: the floor-load centre of rigidity depends on its definition (mixed or discontinuous systems) */
+  | 'centre-definition'
 
 /** A user-model problem (never an exception). `refs` are ids to highlight (elements, floors). */
 export interface Issue {
@@ -188,6 +190,17 @@ export interface CriterionEvaluation {
   readonly caution: string
   /** Assumptions and limits of the set as implemented (shown with the rows). */
   readonly notes?: readonly string[]
+  /**
+   * Which conditions of the clause the rows check and which they do not, where the set does not check
+   * all of them (a pass then holds for the checked conditions only). Absent: the rows are the whole rule.
+   */
+  readonly scope?: CriterionScope
+}
+
+/** Conditions of a code clause that a criterion set checks, and those it leaves to the engineer. */
+export interface CriterionScope {
+  readonly checked: readonly string[]
+  readonly notChecked: readonly string[]
 }
 
 // ---------------------------------------------------------------- static torsion (loads)

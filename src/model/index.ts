@@ -16,6 +16,7 @@ export type {
   GroundMotionSpec,
   LineMass,
   Material,
+  MomentFrameStoryOverride,
   Point,
   PointMass,
   Project,
@@ -39,6 +40,7 @@ export type {
 export { createId } from './ids'
 export { computeElevations, contentFloorId, elementFloorRange, floorContent, floorIndex } from './floors'
 export { CAUTION, CAUTION_SHORT } from './caution'
+export { ACI_318_19_FACTORS, STIFFNESS_FACTOR_DEFAULTS } from './stiffnessFactors'
 export {
   CURRENT_VERSION,
   DEFAULT_SETTINGS,

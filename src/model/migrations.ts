@@ -66,8 +66,54 @@ const v0ToV1: Migration = {
   },
 }
 
+/**
+ * Version 2 takes its default effective-stiffness factors from ACI 318-19 Table 6.6.3.1.1(a)
+ * (walls 0.70, columns 0.70, moment-frame columns 0.70 and beams 0.35; src/model/stiffnessFactors.ts),
+ * where version 1 read a missing factor as 1.0 (gross section) and moment frames had none. So a v1
+ * file keeps its meaning: every wall without `flexureFactor`, every column without `stiffnessFactor`
+ * and every moment frame without `columnFactor` / `beamFactor` gets an explicit 1.0.
+ * Two corrections are not migrated, since the old meaning was wrong: a `pinned` column is now pinned
+ * at its foot only (v1 applied 3EI/h³ to every story), and a moment frame is condensed from its plane
+ * frame (v1 used the typical-story formula in every story).
+ */
+const v1ToV2: Migration = {
+  from: 1,
+  description:
+    'stiffness factors that were missing (read as 1.0 in version 1) are written as 1.0; pinned columns are now pinned at the foot only and moment frames are condensed from the full frame (corrections)',
+  up(doc) {
+    const each = (
+      section: unknown,
+      change: (o: Record<string, unknown>) => Record<string, unknown>,
+    ): unknown => {
+      if (!isObject(section)) return section
+      return Object.fromEntries(Object.entries(section).map(([id, v]) => [id, isObject(v) ? change(v) : v]))
+    }
+    const walls = each(doc.walls, (w) => ('flexureFactor' in w ? w : { ...w, flexureFactor: 1 }))
+    const columns = each(doc.columns, (c) => ('stiffnessFactor' in c ? c : { ...c, stiffnessFactor: 1 }))
+    const frameLines = each(doc.frameLines, (f) => {
+      const k = f.stiffness
+      if (!isObject(k) || k.kind !== 'moment') return f
+      return {
+        ...f,
+        stiffness: {
+          ...k,
+          ...('columnFactor' in k ? {} : { columnFactor: 1 }),
+          ...('beamFactor' in k ? {} : { beamFactor: 1 }),
+        },
+      }
+    })
+    return {
+      ...doc,
+      version: 2,
+      ...(doc.walls !== undefined ? { walls } : {}),
+      ...(doc.columns !== undefined ? { columns } : {}),
+      ...(doc.frameLines !== undefined ? { frameLines } : {}),
+    }
+  },
+}
+
 /** All steps in order; MIGRATIONS[n] takes version n to n + 1. */
-export const MIGRATIONS: readonly Migration[] = [v0ToV1]
+export const MIGRATIONS: readonly Migration[] = [v0ToV1, v1ToV2]
 
 export type MigrationResult =
   | { readonly ok: true; readonly doc: RawDocument; readonly applied: readonly string[] }

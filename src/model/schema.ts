@@ -7,6 +7,7 @@
  */
 import type { FloorId } from './ids'
 import { migrateDocument } from './migrations'
+import { STIFFNESS_FACTOR_DEFAULTS } from './stiffnessFactors'
 import type { RawDocument } from './migrations'
 import type {
   AnalysisSettings,
@@ -31,7 +32,7 @@ import type {
 } from './types'
 
 /** Version written by this build; older files are migrated on load, newer ones refused. */
-export const CURRENT_VERSION = 1
+export const CURRENT_VERSION = 2
 
 /** The `format` tag every project file carries. */
 export const PROJECT_FORMAT = 'gyre-project'
@@ -58,6 +59,8 @@ export const LIMITS = {
   modulusMax: 1e13,
   factorMin: 0.001,
   factorMax: 10,
+  /** Smallest column slab restraint r (fraction of full fixity), -. */
+  restraintMin: 0.01,
   secondMomentMin: 1e-12,
   secondMomentMax: 100,
   storyStiffnessMin: 1,
@@ -691,8 +694,14 @@ function readWall(ctx: Ctx, p: string, id: string, o: Record<string, unknown>, r
   const p2 = point(ctx, key(p, 'p2'), o.p2)
   const thickness = num(ctx, key(p, 'thickness'), o.thickness, thicknessRule)
   const material = materialRef(ctx, key(p, 'material'), o.material, refs)
-  const flexureFactor = num(ctx, key(p, 'flexureFactor'), o.flexureFactor, { ...factorRule, fallback: 1 })
-  const shearFactor = num(ctx, key(p, 'shearFactor'), o.shearFactor, { ...factorRule, fallback: 1 })
+  const flexureFactor = num(ctx, key(p, 'flexureFactor'), o.flexureFactor, {
+    ...factorRule,
+    fallback: STIFFNESS_FACTOR_DEFAULTS.wallFlexure,
+  })
+  const shearFactor = num(ctx, key(p, 'shearFactor'), o.shearFactor, {
+    ...factorRule,
+    fallback: STIFFNESS_FACTOR_DEFAULTS.wallShear,
+  })
   const range = floorRange(ctx, p, o, refs)
   const stories = storyKeys(ctx, key(p, 'stories'), o.stories, refs, range, (sp, sv) => {
     const so = object(ctx, sp, sv, ['thickness', 'flexureFactor', 'shearFactor'])
@@ -760,12 +769,42 @@ function readFrameStiffness(
       }
     }
     case 'moment': {
-      const o = object(ctx, p, v, ['kind', 'bays', 'bayWidth', 'columnI', 'beamI', 'material'])!
+      const o = object(ctx, p, v, [
+        'kind',
+        'bays',
+        'bayWidth',
+        'columnI',
+        'beamI',
+        'material',
+        'baseFixity',
+        'columnFactor',
+        'beamFactor',
+        'stories',
+      ])!
       const bays = num(ctx, key(p, 'bays'), o.bays, { integer: true, min: 1, max: LIMITS.countMax })
       const bayWidth = num(ctx, key(p, 'bayWidth'), o.bayWidth, bayRule)
       const columnI = num(ctx, key(p, 'columnI'), o.columnI, iRule)
       const beamI = num(ctx, key(p, 'beamI'), o.beamI, iRule)
       const material = materialRef(ctx, key(p, 'material'), o.material, refs)
+      const optional = (f: 'columnFactor' | 'beamFactor'): number | undefined =>
+        o[f] === undefined ? undefined : num(ctx, key(p, f), o[f], factorRule)
+      const baseFixity =
+        o.baseFixity === undefined
+          ? undefined
+          : oneOf(ctx, key(p, 'baseFixity'), o.baseFixity, ['fixed', 'pinned'] as const)
+      const columnFactor = optional('columnFactor')
+      const beamFactor = optional('beamFactor')
+      const stories = storyKeys(ctx, key(p, 'stories'), o.stories, refs, range, (sp, sv) => {
+        const so = object(ctx, sp, sv, ['columnI', 'beamI'])
+        if (!so) return undefined
+        const out: { columnI?: number; beamI?: number } = {}
+        for (const f of ['columnI', 'beamI'] as const) {
+          if (so[f] === undefined) continue
+          const x = num(ctx, key(sp, f), so[f], iRule)
+          if (x !== undefined) out[f] = x
+        }
+        return out
+      })
       if (ctx.errors.length > before) return undefined
       return {
         kind,
@@ -774,6 +813,10 @@ function readFrameStiffness(
         columnI: columnI as number,
         beamI: beamI as number,
         material: material as Material['id'],
+        ...(baseFixity !== undefined ? { baseFixity } : {}),
+        ...(columnFactor !== undefined ? { columnFactor } : {}),
+        ...(beamFactor !== undefined ? { beamFactor } : {}),
+        ...(stories !== undefined ? { stories } : {}),
       }
     }
     case 'braced': {
@@ -842,6 +885,10 @@ function readColumn(ctx: Ctx, p: string, id: string, o: Record<string, unknown>,
   const fixity = oneOf(ctx, key(p, 'fixity'), o.fixity, ['fixed', 'pinned'] as const, 'fixed')
   const stiffnessFactor =
     o.stiffnessFactor === undefined ? undefined : num(ctx, key(p, 'stiffnessFactor'), o.stiffnessFactor, factorRule)
+  const restraint =
+    o.restraint === undefined
+      ? undefined
+      : num(ctx, key(p, 'restraint'), o.restraint, { gt: 0, min: LIMITS.restraintMin, max: 1 })
   const range = floorRange(ctx, p, o, refs)
   if (ctx.errors.length > before || !range) return undefined
   if (Ix === 0 && Iy === 0) warn(ctx, p, 'Ix and Iy are both 0: the column carries nothing')
@@ -855,6 +902,7 @@ function readColumn(ctx: Ctx, p: string, id: string, o: Record<string, unknown>,
     material: material as Material['id'],
     fixity: fixity as Column['fixity'],
     ...(stiffnessFactor !== undefined ? { stiffnessFactor } : {}),
+    ...(restraint !== undefined ? { restraint } : {}),
     base: range.base,
     top: range.top,
   }
@@ -1217,6 +1265,7 @@ function validate(ctx: Ctx, doc: RawDocument): Project | undefined {
     'material',
     'fixity',
     'stiffnessFactor',
+    'restraint',
     'base',
     'top',
   ])

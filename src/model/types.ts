@@ -101,7 +101,10 @@ export interface Wall {
   /** m */
   readonly thickness: number
   readonly material: MaterialId
-  /** Effective flexural stiffness factor on I (cracking), - (e.g. 0.7 uncracked, 0.35 cracked). */
+  /**
+   * Effective flexural stiffness factor on I (cracking), - (e.g. 0.7 uncracked, 0.35 cracked; file
+   * default STIFFNESS_FACTOR_DEFAULTS.wallFlexure).
+   */
   readonly flexureFactor: number
   /** Effective shear stiffness factor on A_s, -. */
   readonly shearFactor: number
@@ -120,18 +123,30 @@ export type FrameStiffness =
     }
   | {
       /**
-       * Moment frame from its members by the equal-joint-rotation story formula
-       * k = 12E / (h² (1/ΣKc + 1/ΣKb)), Kc = Ic/h per column, Kb = Ib/L per beam.
+       * Moment frame from its members: a plane frame of bays + 1 column lines and beams of width
+       * `bayWidth` at every floor it spans, axial deformation neglected, joint rotations condensed
+       * out, giving a full lateral stiffness over its floors (docs/mechanics.md §4).
        */
       readonly kind: 'moment'
       readonly bays: number
       /** m */
       readonly bayWidth: number
-      /** Column second moment in the frame's plane, m⁴ */
+      /** Column second moment in the frame's plane (gross section), m⁴ */
       readonly columnI: number
-      /** Beam second moment, m⁴ */
+      /** Beam second moment (gross section), m⁴ */
       readonly beamI: number
       readonly material: MaterialId
+      /** Column feet at the frame's base: fixed against rotation or pinned (default 'fixed'). */
+      readonly baseFixity?: 'fixed' | 'pinned'
+      /** Effective stiffness factor on column I, - (default STIFFNESS_FACTOR_DEFAULTS.frameColumn). */
+      readonly columnFactor?: number
+      /** Effective stiffness factor on beam I, - (default STIFFNESS_FACTOR_DEFAULTS.frameBeam). */
+      readonly beamFactor?: number
+      /**
+       * Per-story overrides keyed by the floor at the top of the story: that story's column I and the
+       * I of the beams at that floor, m⁴.
+       */
+      readonly stories?: Readonly<Record<string, MomentFrameStoryOverride>>
     }
   | {
       /**
@@ -147,7 +162,18 @@ export type FrameStiffness =
       readonly material: MaterialId
     }
 
-/** A moment or braced frame line acting in its own vertical plane; shear-type story stiffness. */
+/** Per-story member overrides of a moment frame (keyed by the floor at the top of the story). */
+export interface MomentFrameStoryOverride {
+  /** Column second moment in this story, m⁴ */
+  readonly columnI?: number
+  /** Beam second moment at the floor on top of this story, m⁴ */
+  readonly beamI?: number
+}
+
+/**
+ * A moment or braced frame line acting in its own vertical plane: shear-type story stiffness for
+ * direct and braced frames, a condensed plane frame (full lateral stiffness) for moment frames.
+ */
 export interface FrameLine {
   readonly id: FrameLineId
   readonly name: string
@@ -158,7 +184,10 @@ export interface FrameLine {
   readonly top: FloorId
 }
 
-/** End fixity of a column in each story: fixed-fixed (12EI/h³) or one end pinned (3EI/h³). */
+/**
+ * Fixity of a column at its foot (where it stands): fixed, or pinned (3EI/h³ in its base story only;
+ * the stories above take 12EI/h³, or less with a slab `restraint` below 1).
+ */
 export type ColumnFixity = 'fixed' | 'pinned'
 
 /** A column: two shear-type elements along its local axes; torsional stiffness ignored. */
@@ -174,8 +203,14 @@ export interface Column {
   readonly Iy: number
   readonly material: MaterialId
   readonly fixity: ColumnFixity
-  /** Effective stiffness factor on I, - (default 1). */
+  /** Effective stiffness factor on I, - (default STIFFNESS_FACTOR_DEFAULTS.column). */
   readonly stiffnessFactor?: number
+  /**
+   * Rotational restraint the floor slabs give the column's ends, as the fraction r of full fixity
+   * (0 < r <= 1, default 1 = fully fixed): a story restrained this way at both ends has
+   * k = r · 12EI/h³ (a flat slab that does not fully fix the column). docs/mechanics.md §5.
+   */
+  readonly restraint?: number
   readonly base: BaseRef
   readonly top: FloorId
 }

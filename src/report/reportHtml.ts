@@ -4,11 +4,13 @@
  * The caution stands in a box at the top, in the running footer of every printed page (CSS page
  * margin box), in a repeated header row of every table, and in the closing footer.
  */
+import { scopeLine } from '@/engine'
 import type { AnalysisResult, BalanceResult, CriterionEvaluation, Issue } from '@/engine'
 import { CAUTION, CAUTION_SHORT, formatNumber, formatQuantity, toDisplay, unitLabel } from '@/model'
 import type { Project, UnitSystem } from '@/model'
 import { cssString, escapeHtml } from './escape'
 import { distinctPlans, planSketchSvg } from './planSketch'
+import { stiffnessFactorsHtml } from './stiffnessFactors'
 import { buildResultTables, describeSpectrum, verdictText } from './tables'
 import type { ResultTable, TableCell } from './tables'
 
@@ -149,7 +151,11 @@ function summaryHtml(project: Project, result: AnalysisResult, units: UnitSystem
     verdicts.push(`Torsion check (${result.torsion.criterion.setName}): ${verdictText(result.torsion.criterion.overall)}`)
   }
   if (result.regularity) {
-    verdicts.push(`Plan regularity (${result.regularity.setName}): ${verdictText(result.regularity.overall)}`)
+    const scope = scopeLine(result.regularity)
+    verdicts.push(
+      `Plan regularity (${result.regularity.setName}): ${verdictText(result.regularity.overall)}` +
+        (scope ? ` for the conditions checked only. ${scope}` : ''),
+    )
   }
   return [
     '<section class="sheet first" id="summary">',
@@ -161,6 +167,7 @@ function summaryHtml(project: Project, result: AnalysisResult, units: UnitSystem
     '</div></div>',
     '<h3>Materials</h3>',
     matTable,
+    stiffnessFactorsHtml(project),
     verdicts.length === 0
       ? ''
       : `<h3>Overall verdicts</h3><ul class="verdicts">${verdicts.map((v) => `<li>${esc(v)}</li>`).join('')}</ul><p class="inline-caution">${esc(CAUTION)}</p>`,

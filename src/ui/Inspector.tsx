@@ -20,6 +20,7 @@ import type {
   UnitSystem,
   Wall,
 } from '@/model'
+import { STIFFNESS_FACTOR_DEFAULTS } from '@/model'
 import { NumberField } from './NumberField'
 import { formatQuantity } from './quantities'
 
@@ -38,6 +39,11 @@ interface Props {
 }
 
 const POSITIVE = { min: 0, exclusiveMin: true } as const
+
+/** A factor's label, saying when the value shown is the default (ACI 318-19 Table 6.6.3.1.1(a)). */
+function factorLabel(label: string, value: number | undefined, fallback: number): string {
+  return value === undefined ? `${label} (default ${fallback.toFixed(2)}, ACI 318-19)` : label
+}
 
 function kindOf(project: Project, id: string): InspectedKind | null {
   for (const k of ['walls', 'frameLines', 'columns', 'slabs', 'lineMasses', 'pointMasses'] as const) {
@@ -209,6 +215,21 @@ function Single(props: Props & { id: string; kind: InspectedKind }) {
         num('columnI', 'Column I', s.columnI, 'secondMoment', (v) => setS({ ...s, columnI: v }), POSITIVE)
         num('beamI', 'Beam I', s.beamI, 'secondMoment', (v) => setS({ ...s, beamI: v }), POSITIVE)
         material(s.material, (m) => setS({ ...s, material: m }))
+        num('columnFactor', factorLabel('Column factor', s.columnFactor, STIFFNESS_FACTOR_DEFAULTS.frameColumn), s.columnFactor ?? STIFFNESS_FACTOR_DEFAULTS.frameColumn, 'ratio', (v) => setS({ ...s, columnFactor: v }), POSITIVE)
+        num('beamFactor', factorLabel('Beam factor', s.beamFactor, STIFFNESS_FACTOR_DEFAULTS.frameBeam), s.beamFactor ?? STIFFNESS_FACTOR_DEFAULTS.frameBeam, 'ratio', (v) => setS({ ...s, beamFactor: v }), POSITIVE)
+        fields.push(
+          <SelectField
+            key={`${id}-baseFixity`}
+            label="Column feet"
+            value={s.baseFixity ?? 'fixed'}
+            testId="field-baseFixity"
+            options={[
+              { value: 'fixed', label: 'fixed' },
+              { value: 'pinned', label: 'pinned' },
+            ]}
+            onCommit={(v) => setS({ ...s, baseFixity: v === 'pinned' ? 'pinned' : 'fixed' })}
+          />,
+        )
       } else {
         num('braces', 'Braces per story', s.braces, 'ratio', (v) => setS({ ...s, braces: v }), { min: 1, integer: true })
         num('bayWidth', 'Bay width', s.bayWidth, 'length', (v) => setS({ ...s, bayWidth: v }), POSITIVE)
@@ -229,17 +250,18 @@ function Single(props: Props & { id: string; kind: InspectedKind }) {
       fields.push(
         <SelectField
           key={`${id}-fixity`}
-          label="Ends"
+          label="Foot"
           value={c.fixity}
           testId="field-fixity"
           options={[
-            { value: 'fixed', label: 'fixed-fixed (12EI/h³)' },
-            { value: 'pinned', label: 'one end pinned (3EI/h³)' },
+            { value: 'fixed', label: 'fixed' },
+            { value: 'pinned', label: 'pinned (base story 3EI/h³)' },
           ]}
           onCommit={(v) => replace({ ...c, fixity: v === 'pinned' ? 'pinned' : 'fixed' })}
         />,
       )
-      num('stiffnessFactor', 'Stiffness factor', c.stiffnessFactor ?? 1, 'ratio', (v) => replace({ ...c, stiffnessFactor: v }), POSITIVE)
+      num('stiffnessFactor', factorLabel('Stiffness factor', c.stiffnessFactor, STIFFNESS_FACTOR_DEFAULTS.column), c.stiffnessFactor ?? STIFFNESS_FACTOR_DEFAULTS.column, 'ratio', (v) => replace({ ...c, stiffnessFactor: v }), POSITIVE)
+      num('restraint', 'Slab restraint r (1 = fixed)', c.restraint ?? 1, 'ratio', (v) => replace({ ...c, restraint: v }), { min: 0, exclusiveMin: true, max: 1 })
       range(c, (base, top) => replace({ ...c, base, top }))
       break
     }

@@ -1,5 +1,6 @@
 import { CAUTION } from '@/model'
 import type { Floor, UnitSystem } from '@/model'
+import { scopeLine } from '@/engine'
 import type { AnalysisResult } from '@/engine'
 import { characterWords } from '@/viewer'
 import { formatNumber, formatQuantity } from './quantities'
@@ -111,6 +112,12 @@ export function ResultsPanel({ floors, result, isStale, units }: Props) {
             Plan regularity: {regularity.setName}
             <br />
             <small>Source: {regularity.source}</small>
+            {scopeLine(regularity) ? (
+              <>
+                <br />
+                <small data-testid="regularity-scope">{scopeLine(regularity)}</small>
+              </>
+            ) : null}
           </caption>
           <thead>
             <tr>

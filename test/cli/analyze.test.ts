@@ -79,9 +79,9 @@ describe('runCli', () => {
   })
 
   it('exits 1 for a file of a newer version, saying to update', () => {
-    const r = run(['new.json'], { 'new.json': boxText.replace('"version": 1', '"version": 7') })
+    const r = run(['new.json'], { 'new.json': boxText.replace('"version": 2', '"version": 7') })
     expect(r.code).toBe(EXIT_INVALID)
-    expect(r.err).toContain('version 7 is newer than this Gyre (reads up to 1): update Gyre')
+    expect(r.err).toContain('version 7 is newer than this Gyre (reads up to 2): update Gyre')
   })
 
   it('exits 1 when the engine cannot analyze a valid file (no floors)', () => {

@@ -8,9 +8,11 @@ import {
   amplificationFactor,
   evaluateRegularity,
   resolveCriterionSet,
+  scopeLine,
   torsionCheckRows,
 } from '@/engine/criteria'
 import type { FloorCentres, StoryTorsionRow } from '@/engine/results'
+import { eccentricOneStorey } from '../helpers/projectBuilder'
 import { denseSolver, oneStoreyEccentric } from './torsionFixtures'
 
 const settings = (over: Partial<AnalysisSettings> = {}): AnalysisSettings => ({
@@ -256,5 +258,22 @@ describe('user criterion sets from a project file', () => {
     expect(parsed.ok).toBe(false)
     if (parsed.ok) return
     expect(parsed.errors.join('\n')).toContain('ratioQuantity')
+  })
+})
+
+describe('plan-regularity scope', () => {
+  it('never calls a pass "regular in plan" and lists the conditions it did not check', () => {
+    // EN 1998-1:2004 4.2.3.2: regularity in plan needs conditions (2) to (6); only (6) is evaluated
+    // here (METHODS.md §2 lists (2)-(5): symmetry, compactness, diaphragm rigidity, slenderness <= 4)
+    const p = eccentricOneStorey()
+    const r = analyzeProject({ ...p, settings: { ...p.settings, criterionSet: 'en1998-1' } }, { spectrum: false })
+    const reg = r.regularity!
+    for (const row of reg.rows) expect(row.label).not.toBe('regular in plan')
+    expect(reg.scope?.notChecked).toHaveLength(4)
+    expect(reg.scope?.notChecked.join(' ')).toContain('4.2.3.2(5) slenderness')
+    expect(scopeLine(reg)).toMatch(/^Checked: 4\.2\.3\.2\(6\) Eq\. 4\.1a.*Not checked/)
+    // a set whose rows are the whole rule carries no scope
+    const asce = analyzeProject({ ...p, settings: { ...p.settings, criterionSet: 'asce7-16' } }, { spectrum: false })
+    expect(asce.torsion?.criterion.scope).toBeUndefined()
   })
 })

@@ -6,6 +6,7 @@ import { readFileSync } from 'node:fs'
 import { fileURLToPath } from 'node:url'
 import type { EditorEvent, EditorStore } from '@/editor'
 import { createEditorStore, dispatch } from '@/editor'
+import { CURRENT_VERSION } from '@/model'
 import type { FloorId, MaterialId, Project } from '@/model'
 
 /** Pick tolerance used by the helpers, m. */
@@ -24,7 +25,7 @@ export function smallFixture(): Project {
   const range = { base: 'ground' as const, top: L3 }
   return {
     format: 'gyre-project',
-    version: 1,
+    version: CURRENT_VERSION,
     name: 'Editor test block',
     floors: [
       { id: L1, name: 'Level 1', height: 3 },

@@ -28,6 +28,7 @@ import type {
   WallId,
   WallStoryOverride,
 } from '@/model'
+import { CURRENT_VERSION } from '@/model'
 import { choleskyFactor, choleskySolveRows } from '@/engine/eigen'
 import type { AssembledElement, FloorProps, Structure } from '@/engine/results'
 import type { StiffnessSolver } from '@/engine/solve'
@@ -265,7 +266,7 @@ export function generateBuilding(options: GenerateBuildingOptions): Project {
 
   return {
     format: 'gyre-project',
-    version: 1,
+    version: CURRENT_VERSION,
     name: `Generated ${n}-storey ${symmetric ? 'symmetric ' : ''}${shape === 'L' ? 'L-plan' : 'block'} (seed ${options.seed ?? 1})`,
     notes: 'Invented by the seeded test generator; not a real building.',
     floors,

@@ -32,6 +32,7 @@ import type {
   Wall,
   WallStoryOverride,
 } from '@/model'
+import { CURRENT_VERSION } from '@/model'
 
 /** Floors: a count (equal heights) or explicit descriptions bottom to top. */
 export type FloorSpec =
@@ -255,7 +256,8 @@ export function projectBuilder(options: ProjectBuilderOptions = {}): ProjectBuil
         Iy: o.Iy ?? 0.0052,
         material: o.material ?? 'concrete',
         fixity: o.fixity ?? 'fixed',
-        ...(o.stiffnessFactor !== undefined ? { stiffnessFactor: o.stiffnessFactor } : {}),
+        // gross section unless a test says otherwise (the model default is the ACI 0.70)
+        stiffnessFactor: o.stiffnessFactor ?? 1,
         base: o.base ?? 'ground',
         top: o.top ?? topId(),
       } as Column
@@ -297,7 +299,7 @@ export function projectBuilder(options: ProjectBuilderOptions = {}): ProjectBuil
     build() {
       return structuredClone({
         format: 'gyre-project',
-        version: 1,
+        version: CURRENT_VERSION,
         name: options.name ?? 'Test project',
         floors,
         materials,

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import boxV0 from '../fixtures/box-v0.json'
+import mixedV1 from '../fixtures/mixed-v1.json'
 import { MIGRATIONS, MigrationError, migrateDocument } from '@/model/migrations'
 import type { Migration, RawDocument } from '@/model/migrations'
 import { CURRENT_VERSION, parseProject } from '@/model/schema'
@@ -32,6 +33,41 @@ describe('MIGRATIONS', () => {
     expect(() => (MIGRATIONS[0] as Migration).up(doc)).toThrow(
       'floors[1].elevation: must be above the floor below (4 m), got 3',
     )
+  })
+})
+
+describe('version 1 -> 2', () => {
+  it('writes an explicit 1.0 where a version-1 file relied on the file default (before/after fixture)', () => {
+    const step = MIGRATIONS[1] as Migration
+    const before = copy(mixedV1)
+    const after = step.up(before)
+    const b = before as { walls: Record<string, object>; columns: Record<string, object>; frameLines: Record<string, { stiffness: object }> }
+    const a = after as typeof b
+    expect(after.version).toBe(2)
+    expect(a.walls['w-plain']).toEqual({ ...b.walls['w-plain'], flexureFactor: 1 })
+    expect(a.walls['w-set']).toEqual(b.walls['w-set'])
+    expect(a.columns['c-plain']).toEqual({ ...b.columns['c-plain'], stiffnessFactor: 1 })
+    expect(a.columns['c-set']).toEqual(b.columns['c-set'])
+    expect(a.frameLines.mf).toEqual({
+      ...b.frameLines.mf,
+      stiffness: { ...b.frameLines.mf!.stiffness, columnFactor: 1, beamFactor: 1 },
+    })
+    // braced frames have no factor: untouched; nothing else changes
+    expect(a.frameLines.bf).toEqual(b.frameLines.bf)
+    expect({ ...after, walls: 0, columns: 0, frameLines: 0, version: 0 }).toEqual({
+      ...before,
+      walls: 0,
+      columns: 0,
+      frameLines: 0,
+      version: 0,
+    })
+    // Pure: the input is untouched
+    expect(before).toEqual(copy(mixedV1))
+  })
+
+  it('passes through sections that are missing or not objects, for validation to report', () => {
+    const after = (MIGRATIONS[1] as Migration).up({ version: 1, walls: 'x' })
+    expect(after).toEqual({ version: 2, walls: 'x' })
   })
 })
 
@@ -78,7 +114,20 @@ describe('parseProject on old files', () => {
     expect(r.project.floors.map((f) => f.height)).toEqual([4, 3.5])
     expect(r.warnings).toEqual([
       'migrated version 0 -> 1: floors[].elevation (absolute, m) becomes floors[].height (story below, m)',
+      `migrated version 1 -> 2: ${(MIGRATIONS[1] as Migration).description}`,
     ])
+  })
+
+  it('keeps the gross-section meaning of a version-1 file whose factors were left to the default', () => {
+    const r = parseProject(copy(mixedV1))
+    if (!r.ok) throw new Error(r.errors.join('; '))
+    expect(r.project.version).toBe(2)
+    expect(r.project.walls['w-plain']?.flexureFactor).toBe(1)
+    expect(r.project.walls['w-set']?.flexureFactor).toBe(0.5)
+    expect(r.project.columns['c-plain']?.stiffnessFactor).toBe(1)
+    expect(r.project.columns['c-set']?.stiffnessFactor).toBe(0.7)
+    expect(r.project.frameLines.mf?.stiffness).toMatchObject({ columnFactor: 1, beamFactor: 1 })
+    expect(r.warnings).toHaveLength(1)
   })
 
   it('still validates after migrating: a version-0 floor too low is refused', () => {

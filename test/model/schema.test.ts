@@ -63,6 +63,30 @@ describe('parseProject', () => {
     ])
   })
 
+  it('reads the version-2 frame and column fields and names the path of a bad one', () => {
+    const doc = copy(corner)
+    setPath(doc, 'frameLines.mf-south.stiffness.baseFixity', 'pinned')
+    setPath(doc, 'frameLines.mf-south.stiffness.beamFactor', 0.5)
+    setPath(doc, 'frameLines.mf-south.stiffness.stories', { L2: { columnI: 0.009 } })
+    setPath(doc, 'columns.c1.restraint', 0.4)
+    const { project, warnings } = projectOf(doc)
+    expect(warnings).toEqual([])
+    expect(project.frameLines['mf-south']?.stiffness).toMatchObject({
+      baseFixity: 'pinned',
+      beamFactor: 0.5,
+      stories: { L2: { columnI: 0.009 } },
+    })
+    expect(project.frameLines['mf-south']?.stiffness).not.toHaveProperty('columnFactor')
+    expect(project.columns.c1?.restraint).toBe(0.4)
+    setPath(doc, 'frameLines.mf-south.stiffness.baseFixity', 'hinged')
+    setPath(doc, 'frameLines.mf-south.stiffness.stories', { L2: { beamI: -1 } })
+    setPath(doc, 'columns.c1.restraint', 1.5)
+    const errors = errorsOf(doc)
+    expect(errors).toContain('frameLines.mf-south.stiffness.stories.L2.beamI: must be > 0, got -1')
+    expect(errors).toContain('columns.c1.restraint: must be <= 1, got 1.5')
+    expect(errors.some((e) => e.startsWith('frameLines.mf-south.stiffness.baseFixity:'))).toBe(true)
+  })
+
   it('collects every error of a file instead of stopping at the first', () => {
     const doc = copy(corner)
     setPath(doc, 'materials.concrete.E', 0)
@@ -259,7 +283,7 @@ describe('parseProject', () => {
   it('refuses a newer version with a message that says to update', () => {
     const doc = copy(box)
     doc.version = 7
-    expect(errorsOf(doc)).toEqual(['version 7 is newer than this Gyre (reads up to 1): update Gyre'])
+    expect(errorsOf(doc)).toEqual([`version 7 is newer than this Gyre (reads up to ${CURRENT_VERSION}): update Gyre`])
   })
 
   it('refuses a file with a wrong or missing format tag, and input that is not an object', () => {
@@ -291,7 +315,7 @@ describe('parseProject', () => {
   it('fills documented defaults for fields a hand-written file leaves out', () => {
     const { project, warnings } = projectOf({
       format: 'gyre-project',
-      version: 1,
+      version: CURRENT_VERSION,
       floors: [{ id: 'F1', height: 3 }],
       materials: { c: { E: 30e9, nu: 0.2 } },
       walls: { w: { p1: { x: 0, y: 0 }, p2: { x: 4, y: 0 }, thickness: 0.2, material: 'c', top: 'F1' } },
@@ -299,7 +323,8 @@ describe('parseProject', () => {
     expect(project.name).toBe('Untitled project')
     expect(project.floors[0]?.name).toBe('F1')
     expect(project.materials.c).toEqual({ id: 'c', name: 'c', E: 30e9, nu: 0.2 })
-    expect(project.walls.w).toMatchObject({ id: 'w', name: 'w', flexureFactor: 1, shearFactor: 1, base: 'ground' })
+    // flexureFactor: ACI 318-19 Table 6.6.3.1.1(a), walls uncracked 0.70 Ig (the file default since version 2)
+    expect(project.walls.w).toMatchObject({ id: 'w', name: 'w', flexureFactor: 0.7, shearFactor: 1, base: 'ground' })
     expect(project.slabs).toEqual({})
     expect(project.settings).toEqual(DEFAULT_SETTINGS)
     expect(warnings).toEqual([
@@ -370,7 +395,7 @@ describe('serializeProject', () => {
       return Object.fromEntries(Object.entries(v).reverse())
     }) as Project
     const text = serializeProject(shuffled)
-    expect(text.startsWith('{\n  "format": "gyre-project",\n  "version": 1,\n  "name": ')).toBe(true)
+    expect(text.startsWith(`{\n  "format": "gyre-project",\n  "version": ${CURRENT_VERSION},\n  "name": `)).toBe(true)
     expect(text.endsWith('}\n')).toBe(true)
     // Field order is fixed; record maps keep the document's order (reversed here).
     const a = JSON.parse(serializeProject(project)) as Json

@@ -5,7 +5,7 @@
  * X, mode 3 couples Y with a turn, then three higher modes of the same kinds.
  */
 import type { AnalysisResult, FloorCentres, FloorProps, ModalResult, ModeCharacter } from '@/engine'
-import { CAUTION, computeElevations, floorContent } from '@/model'
+import { CAUTION, CURRENT_VERSION, computeElevations, floorContent } from '@/model'
 import type { Point, Project } from '@/model'
 
 export interface FixtureOptions {
@@ -155,7 +155,7 @@ export function threeFloorProject(): Project {
   )
   return {
     format: 'gyre-project',
-    version: 1,
+    version: CURRENT_VERSION,
     name: 'Three Floor Test',
     floors,
     materials: { c: { id: 'c', name: 'Concrete', E: 30e9, nu: 0.2 } },

@@ -2,6 +2,7 @@ import type { BaseRef, Column, ColumnFixity, ColumnId, FloorId, MaterialId, Poin
 import { createId } from '@/model'
 import { ELEMENT_DEFAULTS } from './defaults'
 import { nextName, pickMaterial, pickRange } from './newElement'
+import { checkRestraint } from './validate'
 import type { CommandOutcome } from './result'
 import { checkFinite, checkName, checkPoint, checkPositive, refuse } from './result'
 
@@ -15,7 +16,10 @@ export interface AddColumnArgs {
   readonly Iy?: number
   readonly material?: string
   readonly fixity?: ColumnFixity
+  /** Default ELEMENT_DEFAULTS.columnFactor (written into the column so the inspector shows it). */
   readonly stiffnessFactor?: number
+  /** Slab restraint r in (0, 1]; absent = 1 (fully fixed ends). */
+  readonly restraint?: number
   readonly base?: BaseRef
   readonly top?: FloorId
   readonly name?: string
@@ -28,13 +32,15 @@ export function addColumn(doc: Project, args: AddColumnArgs): CommandOutcome {
   const Ix = args.Ix ?? ELEMENT_DEFAULTS.columnI
   const Iy = args.Iy ?? ELEMENT_DEFAULTS.columnI
   const fixity = args.fixity ?? 'fixed'
+  const stiffnessFactor = args.stiffnessFactor ?? ELEMENT_DEFAULTS.columnFactor
   const c =
     checkPoint('at', args.at) ??
     checkFinite('angle', angle) ??
     checkPositive('Ix', Ix) ??
     checkPositive('Iy', Iy) ??
     (fixity === 'fixed' || fixity === 'pinned' ? undefined : `fixity: must be "fixed" or "pinned", got "${String(fixity)}"`) ??
-    (args.stiffnessFactor === undefined ? undefined : checkPositive('stiffnessFactor', args.stiffnessFactor))
+    checkPositive('stiffnessFactor', stiffnessFactor) ??
+    checkRestraint(args.restraint)
   if (c) return refuse(c)
   const material = pickMaterial(doc, args.material)
   if (typeof material !== 'string') return refuse(material.message)
@@ -54,7 +60,8 @@ export function addColumn(doc: Project, args: AddColumnArgs): CommandOutcome {
     Iy,
     material: material as MaterialId,
     fixity,
-    ...(args.stiffnessFactor === undefined ? {} : { stiffnessFactor: args.stiffnessFactor }),
+    stiffnessFactor,
+    ...(args.restraint === undefined ? {} : { restraint: args.restraint }),
     base: range.base,
     top: range.top,
   }

@@ -20,7 +20,7 @@ import {
 export const RECORD_FIELDS: Readonly<Record<RecordKind, readonly string[]>> = {
   walls: ['name', 'p1', 'p2', 'thickness', 'material', 'flexureFactor', 'shearFactor', 'base', 'top', 'stories'],
   frameLines: ['name', 'p1', 'p2', 'stiffness', 'base', 'top'],
-  columns: ['name', 'at', 'angle', 'Ix', 'Iy', 'material', 'fixity', 'stiffnessFactor', 'base', 'top'],
+  columns: ['name', 'at', 'angle', 'Ix', 'Iy', 'material', 'fixity', 'stiffnessFactor', 'restraint', 'base', 'top'],
   slabs: ['floor', 'outline', 'openings', 'areaMass'],
   lineMasses: ['floor', 'points', 'massPerLength'],
   pointMasses: ['floor', 'at', 'mass', 'polarInertia'],
@@ -28,7 +28,32 @@ export const RECORD_FIELDS: Readonly<Record<RecordKind, readonly string[]>> = {
 }
 
 /** Fields that may be cleared by patching them to undefined. */
-export const OPTIONAL_FIELDS: readonly string[] = ['stories', 'stiffnessFactor', 'polarInertia']
+export const OPTIONAL_FIELDS: readonly string[] = ['stories', 'stiffnessFactor', 'restraint', 'polarInertia']
+
+/** A column's slab restraint r: absent, or in (0, 1]. */
+export function checkRestraint(r: number | undefined): Check {
+  if (r === undefined) return undefined
+  return Number.isFinite(r) && r > 0 && r <= 1 ? undefined : `restraint: must lie in (0, 1], got ${r}`
+}
+
+function checkMomentFrameExtras(doc: Project, s: Extract<FrameStiffness, { kind: 'moment' }>): Check {
+  const c =
+    (s.baseFixity === undefined || s.baseFixity === 'fixed' || s.baseFixity === 'pinned'
+      ? undefined
+      : `stiffness.baseFixity: must be "fixed" or "pinned", got "${String(s.baseFixity)}"`) ??
+    (s.columnFactor === undefined ? undefined : checkPositive('stiffness.columnFactor', s.columnFactor)) ??
+    (s.beamFactor === undefined ? undefined : checkPositive('stiffness.beamFactor', s.beamFactor))
+  if (c) return c
+  for (const [k, o] of Object.entries(s.stories ?? {})) {
+    const f = `stiffness.stories.${k}`
+    const cs =
+      checkFloor(doc, f, k) ??
+      (o.columnI === undefined ? undefined : checkPositive(`${f}.columnI`, o.columnI)) ??
+      (o.beamI === undefined ? undefined : checkPositive(`${f}.beamI`, o.beamI))
+    if (cs) return cs
+  }
+  return undefined
+}
 
 /** Readable singular name of a kind, for messages. */
 export const KIND_LABEL: Readonly<Record<RecordKind, string>> = {
@@ -60,7 +85,8 @@ export function checkFrameStiffness(doc: Project, s: FrameStiffness): Check {
         checkPositive('stiffness.bayWidth', s.bayWidth) ??
         checkPositive('stiffness.columnI', s.columnI) ??
         checkPositive('stiffness.beamI', s.beamI) ??
-        checkMaterial(doc, 'stiffness.material', s.material)
+        checkMaterial(doc, 'stiffness.material', s.material) ??
+        checkMomentFrameExtras(doc, s)
       )
     case 'braced':
       return (
@@ -121,6 +147,7 @@ function checkColumn(doc: Project, c: Column): Check {
       ? undefined
       : `fixity: must be "fixed" or "pinned", got "${String(c.fixity)}"`) ??
     (c.stiffnessFactor === undefined ? undefined : checkPositive('stiffnessFactor', c.stiffnessFactor)) ??
+    checkRestraint(c.restraint) ??
     checkRange(doc, c.base, c.top)
   )
 }

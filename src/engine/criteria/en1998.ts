@@ -24,9 +24,20 @@ export const EN1998_1: BuiltInCriterionSet = {
     accidental: 'EN 1998-1:2004 4.3.2(1)P, Eq. 4.3',
   },
   labels: {
-    regular: 'regular in plan',
+    // Only condition (6) is checked, so a pass is never worded as "regular in plan"; one failed
+    // condition is enough for "not regular in plan".
+    regular: 'meets 4.2.3.2(6); conditions (2) to (5) not checked',
     irregular: 'not regular in plan',
     extreme: 'not regular in plan',
+  },
+  regularityScope: {
+    checked: ['4.2.3.2(6) Eq. 4.1a: e0 <= 0.30 r at every level, both directions', '4.2.3.2(6) Eq. 4.1b: r >= l_s'],
+    notChecked: [
+      '4.2.3.2(2) approximate symmetry of lateral stiffness and mass in plan',
+      '4.2.3.2(3) compact plan outline (re-entrant corners and recesses)',
+      '4.2.3.2(4) in-plane stiffness of the floors compared with the lateral elements',
+      '4.2.3.2(5) slenderness L_max/L_min <= 4',
+    ],
   },
   notes: [
     'Centre of rigidity and torsional radius use the floor-load definition ' +

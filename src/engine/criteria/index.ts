@@ -353,5 +353,18 @@ export function evaluateRegularity(
       }
     }
   })
-  return buildEvaluation(set, rows)
+  const evaluation = buildEvaluation(set, rows)
+  const scope = builtInFor(set)?.regularityScope
+  return scope ? { ...evaluation, scope } : evaluation
+}
+
+/**
+ * One line saying which conditions an evaluation checked and which it did not, or null when its rows
+ * are the whole rule. Shown beside every overall verdict of such a set (report, CLI, results panel),
+ * so that a pass is read as a pass of the checked conditions only.
+ */
+export function scopeLine(evaluation: Pick<CriterionEvaluation, 'scope'>): string | null {
+  const s = evaluation.scope
+  if (!s || s.notChecked.length === 0) return null
+  return `Checked: ${s.checked.join('; ')}. Not checked (the engineer's to confirm): ${s.notChecked.join('; ')}.`
 }

@@ -1,5 +1,6 @@
 /** Shapes shared by the built-in criterion set files. */
 import type { CriterionSetSpec } from '@/model'
+import type { CriterionScope } from '../results'
 
 /** Clause text per rule of a set, shown beside each check row. */
 export interface CriterionClauses {
@@ -25,4 +26,6 @@ export interface BuiltInCriterionSet {
   readonly labels: CriterionLabels
   /** Assumptions and limits of the set as implemented, shown with every evaluation. */
   readonly notes: readonly string[]
+  /** Conditions of its plan-regularity clause that are checked and not checked, when not all are. */
+  readonly regularityScope?: CriterionScope
 }

@@ -1,10 +1,10 @@
 /**
  * Column: two shear-type elements along its local axes; torsional stiffness ignored. Local x lies at
  * `angle` counter-clockwise from global X; I_x (about local x) resists translation along local y,
- * I_y resists translation along local x. Units: N, m, Pa, rad.
+ * I_y resists translation along local x. A pinned column is pinned at its foot only. Units: N, m, Pa, rad.
  * @see MODELING.md §Lateral-resisting elements (axis convention), docs/mechanics.md §Columns
  */
-import { elementFloorRange } from '@/model'
+import { STIFFNESS_FACTOR_DEFAULTS, elementFloorRange } from '@/model'
 import type { Column, ColumnFixity, Project } from '@/model'
 import { elementMapRow, extendWithSupportFloor } from '../dofs'
 import type { AssembledElement, Issue } from '../results'
@@ -12,19 +12,31 @@ import { shearChainStiffness } from './frameLine'
 import { leftOutIssue, positive } from './leftOut'
 
 /**
- * Story stiffness of a column, N/m: 12 E I f / h³ with both ends fixed against rotation, 3 E I f / h³
- * with one end pinned (the other fixed); f the effective stiffness factor.
- * @see common practice (flexural sway stiffness of a prismatic member; e.g. Gere & Timoshenko,
- * Mechanics of Materials, from memory)
+ * Story stiffness of a column, N/m, with f the effective stiffness factor and the ends of the story
+ * restrained against rotation as follows. The top end meets a floor slab that gives the fraction r of
+ * full fixity (r = 1: fixed). The bottom end is the column's foot ('fixed' or 'pinned') in its base
+ * story, or another slab joint with the same r ('slab') in the stories above.
+ *
+ * Rotational-restraint model: each slab joint is a rotational spring of stiffness β·EI/h with
+ * β = 6r/(1 - r); static condensation of the Euler-Bernoulli member with its end springs gives
+ * - 'slab' (both ends r):     k = r · 12 E I f / h³  (this is what defines r),
+ * - 'fixed' foot, top r:      k = 6 (1 + 5r)/(2 + r) · E I f / h³  (12 at r = 1, 3 at r -> 0),
+ * - 'pinned' foot, top r:     k = 6r/(1 + r) · E I f / h³          (3 at r = 1, 0 at r -> 0).
+ * At r = 1 these are the classic 12EI/h³ (fixed-fixed) and 3EI/h³ (fixed-pinned).
+ * @see common practice for 12EI/h³ and 3EI/h³ (sway stiffness of a prismatic member; Gere &
+ * Timoshenko, Mechanics of Materials, from memory); the spring forms are derived in
+ * docs/mechanics.md §5 by slope-deflection
  */
 export function columnStoryStiffness(
   E: number,
   I: number,
   h: number,
-  fixity: ColumnFixity,
+  bottom: ColumnFixity | 'slab',
   factor = 1,
+  restraint = 1,
 ): number {
-  const c = fixity === 'fixed' ? 12 : 3
+  const r = restraint
+  const c = bottom === 'slab' ? 12 * r : bottom === 'fixed' ? (6 * (1 + 5 * r)) / (2 + r) : (6 * r) / (1 + r)
   return (c * E * I * factor) / (h * h * h)
 }
 
@@ -50,8 +62,12 @@ export function buildColumnElements(
   const material = project.materials[column.material]
   if (!material) return fail('invalid-model', `material "${column.material}" does not exist`)
   if (!positive(material.E)) return fail('invalid-model', `material E must be > 0 (got ${material.E})`)
-  const factor = column.stiffnessFactor ?? 1
+  const factor = column.stiffnessFactor ?? STIFFNESS_FACTOR_DEFAULTS.column
   if (!positive(factor)) return fail('invalid-model', `stiffness factor must be > 0 (got ${factor})`)
+  const restraint = column.restraint ?? 1
+  if (!(positive(restraint) && restraint <= 1)) {
+    return fail('invalid-model', `restraint must lie in (0, 1] (got ${restraint})`)
+  }
   if (!(Number.isFinite(column.Ix) && column.Ix >= 0 && Number.isFinite(column.Iy) && column.Iy >= 0)) {
     return fail('invalid-model', `Ix and Iy must be finite and >= 0 (got ${column.Ix}, ${column.Iy})`)
   }
@@ -65,8 +81,10 @@ export function buildColumnElements(
     const floor = project.floors[f]
     if (!floor) return fail('element-outside-floors', `floor index ${f} does not exist`)
     if (!positive(floor.height)) return fail('invalid-model', `story height of ${floor.id} must be > 0`)
-    kx.push(columnStoryStiffness(material.E, column.Iy, floor.height, column.fixity, factor))
-    ky.push(columnStoryStiffness(material.E, column.Ix, floor.height, column.fixity, factor))
+    // the foot's fixity acts in the column's base story only; above it both ends meet slabs
+    const bottom = f === range.first ? column.fixity : 'slab'
+    kx.push(columnStoryStiffness(material.E, column.Iy, floor.height, bottom, factor, restraint))
+    ky.push(columnStoryStiffness(material.E, column.Ix, floor.height, bottom, factor, restraint))
   }
   const standsOnFloor = range.below >= 0
   const floors: number[] = []

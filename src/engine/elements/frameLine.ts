@@ -1,23 +1,24 @@
 /**
- * Frame line (moment or braced frame acting in its own plane): shear-type story stiffness, entered
- * directly or derived from the members by a stated simplified method. Units: N, m, Pa.
+ * Frame line (moment or braced frame acting in its own plane). Direct and braced frames have a
+ * shear-type story stiffness; a moment frame is condensed from a plane frame of its members
+ * (momentFrame.ts), giving a full lateral stiffness over its floors. Units: N, m, Pa.
  * @see MODELING.md §Lateral-resisting elements, docs/mechanics.md §Frame lines
  */
-import { elementFloorRange } from '@/model'
+import { STIFFNESS_FACTOR_DEFAULTS, elementFloorRange } from '@/model'
 import type { FrameLine, Project } from '@/model'
 import { elementMapRow, extendWithSupportFloor, segmentDirection } from '../dofs'
 import type { AssembledElement, Issue } from '../results'
 import { leftOutIssue, positive } from './leftOut'
+import { momentFrameStiffness } from './momentFrame'
+import type { MomentFrameStory } from './momentFrame'
 
 /**
  * Story stiffness of a regular moment frame by the equal-joint-rotation method, N/m:
  * k = 12 E / (h² (1/ΣKc + 1/ΣKb)), ΣKc = (bays+1) Ic/h, ΣKb = bays Ib/bayWidth.
- * Assumptions: every joint at the top and bottom of the story turns by the same angle, and the
- * stories above and below are alike, so each beam level is shared by the two stories it joins.
- * Slope-deflection then gives column end moments 6E Kc (theta - Delta/h), beam end moments 6E Kb theta,
- * joint equilibrium at a level 2·ΣKc (theta - Delta/h) + 2·ΣKb theta = 0 and story shear
- * V = 12E ΣKc (Delta/h - theta)/h, hence k above. Limits: Ib -> ∞ gives 12E ΣIc/h³ (fixed-fixed
- * columns). The derivation is written out in docs/mechanics.md §Frame lines.
+ * No longer used by the engine (moment frames are condensed from the plane frame, momentFrame.ts);
+ * kept as the hand formula the docs compare against: it assumes every joint of a story turns by the
+ * same angle and the stories above and below are alike, so it misses the first and top stories.
+ * @see docs/mechanics.md §Frame lines (derivation by slope-deflection, common practice)
  */
 export function momentFrameStoryStiffness(
   E: number,
@@ -96,6 +97,7 @@ export function buildFrameLineElement(
     if (!positive(material.E)) return fail('invalid-model', `material E must be > 0 (got ${material.E})`)
     E = material.E
   }
+  if (spec.kind === 'moment') return buildMomentFrame(project, frame, E, range, seg.d, fail)
   const k: number[] = []
   for (let f = range.first; f <= range.last; f++) {
     const floor = project.floors[f]
@@ -106,15 +108,6 @@ export function buildFrameLineElement(
     switch (spec.kind) {
       case 'direct':
         ks = spec.stories?.[floor.id] ?? spec.storyStiffness
-        break
-      case 'moment':
-        if (!(Number.isInteger(spec.bays) && spec.bays >= 1)) {
-          return fail('invalid-model', `bays must be a whole number >= 1 (got ${spec.bays})`)
-        }
-        if (!positive(spec.bayWidth) || !positive(spec.columnI) || !positive(spec.beamI)) {
-          return fail('invalid-model', 'bay width, column I and beam I must all be > 0')
-        }
-        ks = momentFrameStoryStiffness(E, spec.bays, spec.bayWidth, spec.columnI, spec.beamI, h)
         break
       case 'braced':
         if (!positive(spec.braces) || !positive(spec.bayWidth) || !positive(spec.braceArea)) {
@@ -146,6 +139,76 @@ export function buildFrameLineElement(
       standsOnFloor,
       stiffness: standsOnFloor ? extendWithSupportFloor(fixedBase, k.length) : fixedBase,
       isShearType: true,
+    },
+    issues: [],
+  }
+}
+
+/** Largest number of rotation DOFs a condensed moment frame may have (bays+1 times levels). */
+const MOMENT_FRAME_MAX_JOINTS = 200_000
+
+/**
+ * Assembled-element record of a moment frame: per story E·f_c·I_c for every column and E·f_b·I_b for
+ * every beam at the floor on top (per-story overrides keyed by that floor), condensed to the floors.
+ */
+function buildMomentFrame(
+  project: Pick<Project, 'floors' | 'materials'>,
+  frame: FrameLine,
+  E: number,
+  range: { below: number; first: number; last: number },
+  d: { x: number; y: number },
+  fail: (code: Issue['code'], why: string) => { element: null; issues: Issue[] },
+): { element: AssembledElement | null; issues: Issue[] } {
+  const spec = frame.stiffness
+  if (spec.kind !== 'moment') throw new Error('[engine] buildMomentFrame needs a moment frame')
+  if (!(Number.isInteger(spec.bays) && spec.bays >= 1)) {
+    return fail('invalid-model', `bays must be a whole number >= 1 (got ${spec.bays})`)
+  }
+  if (!positive(spec.bayWidth) || !positive(spec.columnI) || !positive(spec.beamI)) {
+    return fail('invalid-model', 'bay width, column I and beam I must all be > 0')
+  }
+  const fc = spec.columnFactor ?? STIFFNESS_FACTOR_DEFAULTS.frameColumn
+  const fb = spec.beamFactor ?? STIFFNESS_FACTOR_DEFAULTS.frameBeam
+  if (!positive(fc)) return fail('invalid-model', `column factor must be > 0 (got ${fc})`)
+  if (!positive(fb)) return fail('invalid-model', `beam factor must be > 0 (got ${fb})`)
+  const stories: MomentFrameStory[] = []
+  for (let f = range.first; f <= range.last; f++) {
+    const floor = project.floors[f]
+    if (!floor) return fail('element-outside-floors', `floor index ${f} does not exist`)
+    if (!positive(floor.height)) return fail('invalid-model', `story height of ${floor.id} must be > 0`)
+    const o = spec.stories?.[floor.id]
+    const Ic = o?.columnI ?? spec.columnI
+    const Ib = o?.beamI ?? spec.beamI
+    if (!positive(Ic) || !positive(Ib)) {
+      return fail('invalid-model', `column I and beam I at ${floor.id} must be > 0 (got ${Ic}, ${Ib})`)
+    }
+    stories.push({ h: floor.height, EIc: E * fc * Ic, EIb: E * fb * Ib })
+  }
+  if ((spec.bays + 1) * (stories.length + 1) > MOMENT_FRAME_MAX_JOINTS) {
+    return fail(
+      'invalid-model',
+      `${spec.bays} bays over ${stories.length} stories is more than ${MOMENT_FRAME_MAX_JOINTS} joints`,
+    )
+  }
+  const fixedBase = momentFrameStiffness(stories, spec.bays, spec.bayWidth, spec.baseFixity ?? 'fixed')
+  if (!fixedBase) return fail('invalid-model', 'its joint rotation stiffness is not positive definite')
+  const n = stories.length
+  for (let i = 0; i < n * n; i++) {
+    if (!Number.isFinite(fixedBase[i])) return fail('invalid-model', 'its condensed stiffness is not finite')
+  }
+  const standsOnFloor = range.below >= 0
+  const floors: number[] = []
+  if (standsOnFloor) floors.push(range.below)
+  for (let f = range.first; f <= range.last; f++) floors.push(f)
+  return {
+    element: {
+      id: frame.id,
+      kind: 'frameLine',
+      floors,
+      map: elementMapRow(frame.p1, d),
+      standsOnFloor,
+      stiffness: standsOnFloor ? extendWithSupportFloor(fixedBase, n) : fixedBase,
+      isShearType: false,
     },
     issues: [],
   }

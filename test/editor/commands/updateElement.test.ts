@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import type { FloorId } from '@/model'
+import type { FloorId, MaterialId } from '@/model'
 import { createTestEditor } from '../../helpers/createTestEditor'
 import { checkCancel, checkDoUndoRedo, checkRefused } from './checklist'
 
@@ -33,6 +33,25 @@ describe('updateElement', () => {
     checkDoUndoRedo(store, 'updateElement', { id: 'pm1', patch: { mass: 2500 } }, (doc) => {
       expect(doc.pointMasses.pm1?.mass).toBeCloseTo(2500, 12)
     })
+  })
+
+  it('patches a column slab restraint and refuses one above 1, naming the field', () => {
+    const store = createTestEditor()
+    checkDoUndoRedo(store, 'updateElement', { id: 'c1', patch: { restraint: 0.5 } }, (doc) => {
+      expect(doc.columns.c1?.restraint).toBe(0.5)
+    })
+    checkRefused(store, 'updateElement', { id: 'c1', patch: { restraint: 2 } }, 'restraint: must lie in (0, 1], got 2')
+  })
+
+  it('refuses a moment frame with a bad base fixity, factor or per-story I, naming the field', () => {
+    const store = createTestEditor()
+    const moment = { kind: 'moment', bays: 2, bayWidth: 6, columnI: 0.005, beamI: 0.006, material: 'concrete' as MaterialId } as const
+    checkDoUndoRedo(store, 'updateElement', { id: 'f1', patch: { stiffness: { ...moment, baseFixity: 'pinned', beamFactor: 0.5 } } }, (doc) => {
+      expect(doc.frameLines.f1?.stiffness).toMatchObject({ kind: 'moment', baseFixity: 'pinned', beamFactor: 0.5 })
+    })
+    checkRefused(store, 'updateElement', { id: 'f1', patch: { stiffness: { ...moment, baseFixity: 'hinged' as never } } }, 'stiffness.baseFixity: must be "fixed" or "pinned"')
+    checkRefused(store, 'updateElement', { id: 'f1', patch: { stiffness: { ...moment, columnFactor: 0 } } }, 'stiffness.columnFactor: must be > 0')
+    checkRefused(store, 'updateElement', { id: 'f1', patch: { stiffness: { ...moment, stories: { L9: { beamI: 1 } } } } }, 'stiffness.stories.L9')
   })
 
   it('is undone by a bail when cancelled mid-interaction', () => {

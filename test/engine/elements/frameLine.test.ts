@@ -6,6 +6,7 @@ import {
   momentFrameStoryStiffness,
   shearChainStiffness,
 } from '@/engine/elements/frameLine'
+import { momentFrameStiffness } from '@/engine/elements/momentFrame'
 import type { FrameLine } from '@/model'
 import { expectArrayRelClose, expectRelClose } from '../../helpers/approx'
 import { projectBuilder } from '../../helpers/projectBuilder'
@@ -62,7 +63,7 @@ describe('buildFrameLineElement', () => {
     expect(element!.isShearType).toBe(true)
   })
 
-  it('derives moment and braced story stiffness from the members and story heights', () => {
+  it('condenses moment frames and derives braced story stiffness from the members and story heights', () => {
     const p = projectBuilder({ floors: [{ height: 4.5 }, { height: 3.2 }] })
       .frameLine({
         id: 'm',
@@ -79,9 +80,18 @@ describe('buildFrameLineElement', () => {
       })
       .build()
     const m = buildFrameLineElement(p, p.frameLines.m as FrameLine).element!
-    const k1 = momentFrameStoryStiffness(30e9, 4, 6, 0.0108, 0.01143, 4.5)
-    const k2 = momentFrameStoryStiffness(30e9, 4, 6, 0.0108, 0.01143, 3.2)
-    expectArrayRelClose(m.stiffness, [k1 + k2, -k2, -k2, k2], 1e-15)
+    // moment frames: the condensed plane frame (checked against a full frame in momentFrame.test.ts)
+    // with the default factors 0.70 columns, 0.35 beams (ACI 318-19 Table 6.6.3.1.1(a))
+    const expected = momentFrameStiffness(
+      [
+        { h: 4.5, EIc: 30e9 * 0.7 * 0.0108, EIb: 30e9 * 0.35 * 0.01143 },
+        { h: 3.2, EIc: 30e9 * 0.7 * 0.0108, EIb: 30e9 * 0.35 * 0.01143 },
+      ],
+      4,
+      6,
+    )!
+    expectArrayRelClose(m.stiffness, expected, 1e-15)
+    expect(m.isShearType).toBe(false)
     const b = buildFrameLineElement(p, p.frameLines.b as FrameLine).element!
     const kb = bracedFrameStoryStiffness(200e9, 2, 6, 4.2e-3, 3.2)
     expect(b.floors).toEqual([0, 1])
