@@ -56,8 +56,8 @@ function constantTextColumns(table: ResultTable): Set<number> {
 
 /**
  * The project name for printed pages: no user text may go into CSS (a page margin box), so the
- * name is DOM text shown only in print, as a header row that repeats on every page a table spans
- * and as a line above sections without such a table.
+ * name is DOM text shown only in print, as a header row that repeats on every page a table spans,
+ * as a line above sections without such a table, and in each plan sketch's caption.
  */
 function nameRow(name: string, colspan: number): string {
   return `<tr class="name-row"><th colspan="${colspan}">${esc(name)}</th></tr>`
@@ -191,7 +191,7 @@ function plansHtml(project: Project, result: AnalysisResult, units: UnitSystem, 
     const floors = g.floorIndices.map((i) => i + 1).join(', ')
     return `<figure class="plan">${planSketchSvg(project, result, g, units)}<figcaption>Floor${
       g.floorIndices.length === 1 ? '' : 's'
-    } ${esc(floors)}</figcaption></figure>`
+    } ${esc(floors)}<span class="print-name"> · ${esc(name)}</span></figcaption></figure>`
   })
   return [
     '<section class="sheet" id="plans">',
@@ -347,10 +347,11 @@ footer.closing { margin-top: 8mm; padding-top: 2mm; border-top: 2px solid var(--
   @bottom-left { content: ${cssString(CAUTION)}; font-size: 7.5pt; color: #8a5d12; }
   @bottom-right { content: counter(page) " / " counter(pages); font-size: 7.5pt; color: #5d636c; }
   @top-left { content: "Gyre report"; font-size: 7.5pt; color: #5d636c; } }
-.running-head, table.grid thead tr.name-row { display: none; }
+.running-head, table.grid thead tr.name-row, .print-name { display: none; }
 @media print {
   .running-head { display: block; margin: 0 0 2mm; text-align: right; font-size: 7.5pt; color: var(--muted); }
   table.grid thead tr.name-row { display: table-row; }
+  .print-name { display: inline; }
   table.grid thead tr.name-row th { background: none; text-align: right; font-weight: 400; font-size: 7.5pt;
     color: var(--muted); border-bottom: 0; }
   body { max-width: none; padding: 0; }
