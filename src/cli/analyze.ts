@@ -1,18 +1,22 @@
 /**
  * Node entry: `npm run analyze -- [model.json] [--json] [--time-history] [--criteria <id>] [--units SI|US] [--balance] [--report file.html] [--csv folder]`.
  * Reads a project file, validates it, runs the engine and prints a summary (or the full JSON result).
- * Exit codes: 0 analysis completed, 1 invalid model or arguments, 2 mechanism, 3 internal error.
+ * Exit codes: 0 analysis completed, 1 invalid model or arguments (including an output path that cannot
+ * be written or would overwrite the model, and an unknown --criteria id), 2 mechanism, 3 internal error.
  * Imports only model and engine: the living proof that both run without a browser.
  * @see ../../docs/cli.md
  */
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs'
 import { dirname, join, resolve } from 'node:path'
 import { fileURLToPath } from 'node:url'
-import { analyzeProject, suggestBalance } from '@/engine'
+import { BUILT_IN_CRITERION_SETS, analyzeProject, suggestBalance } from '@/engine'
 import type { AnalysisOptions } from '@/engine'
 import { CAUTION, parseProjectText } from '@/model'
-import { buildReportHtml, buildResultTables, csvFileName, toCsv } from '@/report'
+import { TABLE_IDS, buildReportHtml, buildResultTables, csvFileName, toCsv } from '@/report'
 import { USAGE, parseArgs } from './args'
+import { findDuplicateKeys } from './duplicateKeys'
+import { canonicalPath, outputProblem, probeNodePath } from './outputTargets'
+import type { ProbePath } from './outputTargets'
 import { formatBalance, formatIssue, formatResultJson, formatSummary } from './format'
 
 /** Where the CLI writes and how it reads files (injected so tests run in-process). */
@@ -22,6 +26,10 @@ export interface CliIo {
   readonly readFile: (path: string) => string
   /** Write a text file, creating its folder (used by --report and --csv). */
   readonly writeFile: (path: string, text: string) => void
+  /** What is at a path (default: the real file system); output paths are checked with it first. */
+  readonly probe?: ProbePath
+  /** Canonical form of a path, to tell whether two paths name one file (default: realpath). */
+  readonly canonical?: (path: string) => string
 }
 
 export const EXIT_OK = 0
@@ -55,6 +63,25 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
     return EXIT_OK
   }
   const file = o.file ?? DEFAULT_MODEL
+  const probe = io.probe ?? probeNodePath
+  const canonical = io.canonical ?? canonicalPath
+  // Output paths are checked before anything is read, analysed or printed (docs/cli.md).
+  const targets: [string, string | null, 'file' | 'folder'][] = [
+    ['--report', o.report, 'file'],
+    ['--csv', o.csv, 'folder'],
+  ]
+  for (const [option, path, want] of targets) {
+    if (path === null) continue
+    const problem = outputProblem(path, want, probe)
+    if (problem !== null) {
+      io.err(`[cli] ${option}: cannot write ${path}: ${problem}\n`)
+      return EXIT_INVALID
+    }
+  }
+  if (o.report !== null && canonical(o.report) === canonical(file)) {
+    io.err(`[cli] --report: ${o.report} is the model file itself; refusing to overwrite it\n`)
+    return EXIT_INVALID
+  }
   let text: string
   try {
     text = io.readFile(file)
@@ -67,6 +94,30 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
     io.err(`[file] ${file} is not a valid Gyre project (${parsed.errors.length} problem${parsed.errors.length === 1 ? '' : 's'}):\n`)
     for (const e of parsed.errors) io.err(`${e}\n`)
     return EXIT_INVALID
+  }
+  if (o.csv !== null) {
+    const csvDir = o.csv
+    const clash = TABLE_IDS.map((id) => join(csvDir, csvFileName(parsed.project, { id }))).find(
+      (path) => canonical(path) === canonical(file),
+    )
+    if (clash !== undefined) {
+      io.err(`[cli] --csv: ${clash} would overwrite the model file ${file}; choose another folder\n`)
+      return EXIT_INVALID
+    }
+  }
+  if (o.criteria !== null) {
+    const known = [
+      ...BUILT_IN_CRITERION_SETS.map((b) => b.spec.id),
+      ...(parsed.project.settings.criterionSets ?? []).map((c) => c.id),
+      'none',
+    ]
+    if (!known.includes(o.criteria.trim())) {
+      io.err(`[cli] --criteria: unknown criterion set ${JSON.stringify(o.criteria)} (known: ${known.join(', ')})\n`)
+      return EXIT_INVALID
+    }
+  }
+  for (const d of findDuplicateKeys(text)) {
+    io.err(`[file] warning: ${d.path}: the key appears ${d.count} times in one object; only the last value is used\n`)
   }
   for (const w of parsed.warnings) io.err(`[file] warning: ${w}\n`)
 
@@ -82,6 +133,16 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
     return EXIT_INTERNAL
   }
 
+  // A write that fails after the checks (disk full, a race) is still the user's path, not a defect.
+  let failedWrite: { path: string; message: string } | null = null
+  const write = (path: string, content: string): void => {
+    try {
+      io.writeFile(path, content)
+    } catch (error) {
+      failedWrite = { path, message: (error as Error).message }
+      throw error
+    }
+  }
   try {
     const balance = o.balance && result.status === 'ok' ? suggestBalance(parsed.project) : null
     if (o.json) {
@@ -97,15 +158,20 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
         generatedAt: new Date(),
         ...(balance ? { balance } : {}),
       })
-      io.writeFile(o.report, html)
+      write(o.report, html)
       io.err(`[cli] report written to ${o.report}\n`)
     }
     if (o.csv !== null) {
       const tables = buildResultTables(parsed.project, result, o.units)
-      for (const t of tables) io.writeFile(join(o.csv, csvFileName(parsed.project, t)), toCsv(t, parsed.project))
+      for (const t of tables) write(join(o.csv, csvFileName(parsed.project, t)), toCsv(t, parsed.project))
       io.err(`[cli] ${tables.length} CSV tables written to ${o.csv}\n`)
     }
   } catch (error) {
+    if (failedWrite !== null) {
+      const { path, message } = failedWrite
+      io.err(`[cli] cannot write ${path}: ${message}\n`)
+      return EXIT_INVALID
+    }
     io.err(`[cli] internal error while printing the result: ${(error as Error).message}\n`)
     return EXIT_INTERNAL
   }

@@ -34,7 +34,7 @@ options:
   --csv <folder>       also write every result table as a CSV file into the folder
   -h, --help           show this text
 
-exit codes: 0 analysis completed, 1 invalid model or arguments, 2 mechanism, 3 internal error`
+exit codes: 0 analysis completed, 1 invalid model, arguments or output path, 2 mechanism, 3 internal error`
 
 /** Parse argv (without node and script). Unknown options are errors, never ignored. */
 export function parseArgs(argv: readonly string[]): ArgsResult {

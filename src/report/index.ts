@@ -9,7 +9,7 @@
  */
 export { TABLE_IDS, buildResultTables, describeSpectrum, verdictText, worstVerdict } from './tables'
 export type { ResultTable, TableCell, TableColumn, TableId } from './tables'
-export { csvCell, csvField, csvHeader, toCsv } from './csv'
+export { csvCell, csvField, csvHeader, csvTextField, toCsv } from './csv'
 export { csvFileName, fileSlug, reportFileName } from './fileNames'
 export { buildReportHtml, formatTimestamp } from './reportHtml'
 export type { ReportOptions } from './reportHtml'

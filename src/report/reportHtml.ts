@@ -3,6 +3,8 @@
  * external files) built from a project and its analysis result. Pure: returns a string.
  * The caution stands in a box at the top, in the running footer of every printed page (CSS page
  * margin box), in a repeated header row of every table, and in the closing footer.
+ * User text (names, notes) appears only as escaped HTML text and quoted attribute values, never in
+ * the style sheet; a Content-Security-Policy meta tag forbids every outside request and all scripts.
  */
 import { scopeLine } from '@/engine'
 import type { AnalysisResult, BalanceResult, CriterionEvaluation, Issue } from '@/engine'
@@ -54,7 +56,20 @@ function constantTextColumns(table: ResultTable): Set<number> {
   return constant
 }
 
-function tableHtml(table: ResultTable): string {
+/**
+ * The project name for printed pages: no user text may go into CSS (a page margin box), so the
+ * name is DOM text shown only in print, as a header row that repeats on every page a table spans,
+ * as a line above sections without such a table, and in each plan sketch's caption.
+ */
+function nameRow(name: string, colspan: number): string {
+  return `<tr class="name-row"><th colspan="${colspan}">${esc(name)}</th></tr>`
+}
+
+function runningHead(name: string): string {
+  return `<p class="running-head" aria-hidden="true">${esc(name)}</p>`
+}
+
+function tableHtml(table: ResultTable, name: string): string {
   const constant = constantTextColumns(table)
   const shown = table.columns.map((c, j) => ({ c, j })).filter(({ j }) => !constant.has(j))
   const head = shown
@@ -74,7 +89,7 @@ function tableHtml(table: ResultTable): string {
     `<h2>${esc(table.title)}</h2>`,
     `<table class="grid" data-table="${esc(table.id)}">`,
     // The first header row repeats on every printed page the table spans.
-    `<thead><tr class="caution-row"><th colspan="${shown.length}">${esc(CAUTION_SHORT)}</th></tr><tr>${head}</tr></thead>`,
+    `<thead><tr class="caution-row"><th colspan="${shown.length}">${esc(CAUTION_SHORT)}</th></tr>${nameRow(name, shown.length)}<tr>${head}</tr></thead>`,
     `<tbody>${body.join('')}</tbody>`,
     '</table>',
     notes === '' ? '' : `<ul class="notes">${notes}</ul>`,
@@ -176,17 +191,18 @@ function summaryHtml(project: Project, result: AnalysisResult, units: UnitSystem
   ].join('\n')
 }
 
-function plansHtml(project: Project, result: AnalysisResult, units: UnitSystem): string {
+function plansHtml(project: Project, result: AnalysisResult, units: UnitSystem, name: string): string {
   const groups = distinctPlans(project)
   if (groups.length === 0) return ''
   const figures = groups.map((g) => {
     const floors = g.floorIndices.map((i) => i + 1).join(', ')
     return `<figure class="plan">${planSketchSvg(project, result, g, units)}<figcaption>Floor${
       g.floorIndices.length === 1 ? '' : 's'
-    } ${esc(floors)}</figcaption></figure>`
+    } ${esc(floors)}<span class="print-name"> · ${esc(name)}</span></figcaption></figure>`
   })
   return [
     '<section class="sheet" id="plans">',
+    runningHead(name),
     '<h2>Floor plans with centres</h2>',
     '<p class="legend"><span class="key-cm">○+</span> centre of mass · <span class="key-cr">◆</span> centre of rigidity (labelled with the floor number; the thin line joins the floors bottom to top) · thick bars walls · dashed lines frame lines · squares columns. One sketch per distinct plan (same slabs and lateral elements).</p>',
     ...figures,
@@ -194,7 +210,7 @@ function plansHtml(project: Project, result: AnalysisResult, units: UnitSystem):
   ].join('\n')
 }
 
-function issuesHtml(issues: readonly Issue[]): string {
+function issuesHtml(issues: readonly Issue[], name: string): string {
   const items =
     issues.length === 0
       ? '<p>No issues were reported for this model.</p>'
@@ -204,10 +220,10 @@ function issuesHtml(issues: readonly Issue[]): string {
               `<tr><td class="sev-${esc(i.severity)}">${esc(i.severity)}</td><td>${esc(i.code)}</td><td>${esc(i.message)}</td><td>${esc(i.refs.join(', '))}</td></tr>`,
           )
           .join('')}</tbody></table>`
-  return ['<section class="sheet" id="issues">', '<h2>Issues</h2>', items, '</section>'].join('\n')
+  return ['<section class="sheet" id="issues">', runningHead(name), '<h2>Issues</h2>', items, '</section>'].join('\n')
 }
 
-function balanceHtml(balance: BalanceResult): string {
+function balanceHtml(balance: BalanceResult, name: string): string {
   const ratio = (v: number | null): string => (v === null ? '–' : formatNumber(v, 4))
   const rows = balance.suggestions
     .map(
@@ -218,9 +234,10 @@ function balanceHtml(balance: BalanceResult): string {
   const body =
     balance.suggestions.length === 0
       ? `<p>${esc(balance.message ?? 'No suggestions.')}</p>`
-      : `<table class="grid" data-table="balance"><thead><tr class="caution-row"><th colspan="8">${esc(CAUTION_SHORT)}</th></tr><tr><th>rank</th><th>change</th><th>score before</th><th>score after</th><th>worst e/r before</th><th>worst e/r after</th><th>worst drift ratio before</th><th>worst drift ratio after</th></tr></thead><tbody>${rows}</tbody></table>`
+      : `<table class="grid" data-table="balance"><thead><tr class="caution-row"><th colspan="8">${esc(CAUTION_SHORT)}</th></tr>${nameRow(name, 8)}<tr><th>rank</th><th>change</th><th>score before</th><th>score after</th><th>worst e/r before</th><th>worst e/r after</th><th>worst drift ratio before</th><th>worst drift ratio after</th></tr></thead><tbody>${rows}</tbody></table>`
   return [
     '<section class="sheet" id="balance">',
+    balance.suggestions.length === 0 ? runningHead(name) : '',
     '<h2>Balance suggestions</h2>',
     `<p>Single-element changes ranked by the balance score S, the root mean square over floors of e/r in both directions (S = 0 when every centre of rigidity sits on its centre of mass). Current score ${esc(formatNumber(balance.score, 4))}, worst e/r ${esc(formatNumber(balance.worstEccentricityRatio, 4))}; ${balance.trials} trial analyses. Each change is assessed on its own, not combined with the others.</p>`,
     body,
@@ -229,7 +246,7 @@ function balanceHtml(balance: BalanceResult): string {
   ].join('\n')
 }
 
-function methodHtml(result: AnalysisResult): string {
+function methodHtml(result: AnalysisResult, name: string): string {
   const evaluations = [result.torsion?.criterion, result.regularity].filter(
     (e): e is CriterionEvaluation => e !== null && e !== undefined,
   )
@@ -260,6 +277,7 @@ function methodHtml(result: AnalysisResult): string {
   ]
   return [
     '<section class="sheet" id="method">',
+    runningHead(name),
     '<h2>Method and sources</h2>',
     `<ul class="method">${points.map((p) => `<li>${esc(p)}</li>`).join('')}</ul>`,
     sets.length === 0 ? '<p>No criterion set was evaluated.</p>' : `<h3>Criterion sets</h3><ul class="method">${sets.join('')}</ul>`,
@@ -269,7 +287,16 @@ function methodHtml(result: AnalysisResult): string {
   ].join('\n')
 }
 
-function styles(projectName: string): string {
+/**
+ * The report's Content-Security-Policy: nothing may be fetched from anywhere (no scripts, frames,
+ * fonts, forms or outside images), only the inline style sheet and data: images are allowed.
+ * @see Content Security Policy Level 3 (W3C), section 6 (directives)
+ */
+export const REPORT_CSP =
+  "default-src 'none'; style-src 'unsafe-inline'; img-src data:; base-uri 'none'; form-action 'none'"
+
+/** The report's style sheet: fixed text only, no user text (names go into the DOM). */
+function styles(): string {
   return `
 :root { --ink: #23262b; --muted: #5d636c; --rule: #d3d7dc; --band: #f3f5f6; --accent: #2d5562;
   --warm: #fbf4e4; --warm-edge: #a8741c; --fail: #8a2b1a; }
@@ -335,8 +362,14 @@ footer.closing { margin-top: 8mm; padding-top: 2mm; border-top: 2px solid var(--
 @page { size: auto; margin: 15mm 13mm 18mm;
   @bottom-left { content: ${cssString(CAUTION)}; font-size: 7.5pt; color: #8a5d12; }
   @bottom-right { content: counter(page) " / " counter(pages); font-size: 7.5pt; color: #5d636c; }
-  @top-left { content: ${cssString(`Gyre report: ${projectName}`)}; font-size: 7.5pt; color: #5d636c; } }
+  @top-left { content: "Gyre report"; font-size: 7.5pt; color: #5d636c; } }
+.running-head, table.grid thead tr.name-row, .print-name { display: none; }
 @media print {
+  .running-head { display: block; margin: 0 0 2mm; text-align: right; font-size: 7.5pt; color: var(--muted); }
+  table.grid thead tr.name-row { display: table-row; }
+  .print-name { display: inline; }
+  table.grid thead tr.name-row th { background: none; text-align: right; font-weight: 400; font-size: 7.5pt;
+    color: var(--muted); border-bottom: 0; }
   body { max-width: none; padding: 0; }
   html { font-size: 9.5pt; }
   section.sheet { break-before: page; margin: 0; }
@@ -363,10 +396,11 @@ export function buildReportHtml(project: Project, result: AnalysisResult, option
     '<html lang="en">',
     '<head>',
     '<meta charset="utf-8">',
+    `<meta http-equiv="Content-Security-Policy" content="${esc(REPORT_CSP)}">`,
     '<meta name="viewport" content="width=device-width, initial-scale=1">',
     '<meta name="generator" content="Gyre">',
     `<title>${esc(`Gyre report: ${name}`)}</title>`,
-    `<style>${styles(name)}</style>`,
+    `<style>${styles()}</style>`,
     '</head>',
     '<body>',
     '<header class="title-block">',
@@ -375,11 +409,11 @@ export function buildReportHtml(project: Project, result: AnalysisResult, option
     '</header>',
     `<div class="caution-box" role="note" id="caution-top"><strong>Caution</strong>${esc(CAUTION)}</div>`,
     summaryHtml(project, result, units),
-    plansHtml(project, result, units),
-    ...tables.map(tableHtml),
-    issuesHtml(result.issues),
-    options.balance ? balanceHtml(options.balance) : '',
-    methodHtml(result),
+    plansHtml(project, result, units, name),
+    ...tables.map((t) => tableHtml(t, name)),
+    issuesHtml(result.issues, name),
+    options.balance ? balanceHtml(options.balance, name) : '',
+    methodHtml(result, name),
     `<footer class="closing" id="caution-bottom">Gyre · ${esc(name)} · ${esc(when)}<br>${esc(CAUTION)}</footer>`,
     '</body>',
     '</html>',

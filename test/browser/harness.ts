@@ -11,7 +11,7 @@ import type { Browser, BrowserContext, ConsoleMessage, Page } from 'playwright-c
 import { preview } from 'vite'
 import type { PreviewServer } from 'vite'
 
-export const CHROMIUM_PATH = process.env.GYRE_CHROMIUM ?? '/usr/bin/chromium'
+export const CHROMIUM_PATH = process.env.GYRE_CHROMIUM || '/usr/bin/chromium'
 export const CHROMIUM_ARGS = [
   '--headless=new',
   '--no-sandbox',

@@ -141,6 +141,10 @@ describe('3D view', () => {
     // WebM is Matroska/EBML: the file starts with the EBML magic 1A 45 DF A3 (RFC 8794 §8.1).
     expect(Array.from(bytes.subarray(0, 4))).toEqual([0x1a, 0x45, 0xdf, 0xa3])
     expect(bytes.length).toBeGreaterThan(2000)
+    // DocType "webm" and the Matroska codec id "V_VP8" (RFC 9559 §5.1.4.1.21 CodecID; WebM spec).
+    const ascii = Buffer.from(bytes).toString('latin1')
+    expect(ascii).toContain('webm')
+    expect(ascii).toContain('V_VP8')
     await close()
   })
 

@@ -4,6 +4,7 @@ import { fileURLToPath } from 'node:url'
 import { describe, expect, it } from 'vitest'
 import { EXIT_INVALID, EXIT_MECHANISM, EXIT_OK, runCli } from '@/cli/analyze'
 import type { CliIo } from '@/cli/analyze'
+import { BUILT_IN_CRITERION_SETS } from '@/engine'
 import { CAUTION } from '@/model'
 
 const root = fileURLToPath(new URL('../../', import.meta.url))
@@ -132,10 +133,13 @@ describe('runCli', () => {
     expect(r.out).not.toMatch(/NaN|Infinity/)
   })
 
-  it('passes --criteria to the engine: an unknown id is an issue, not a crash', () => {
+  it('exits 1 for an unknown --criteria id and names the known ids, before printing anything', () => {
     const r = run([example('eccentric-box.json'), '--criteria', 'no-such-set'])
-    expect(r.code).toBe(EXIT_OK)
-    expect(r.out).toMatch(/warning criterion-unknown: .*no-such-set/)
+    expect(r.code).toBe(EXIT_INVALID)
+    expect(r.out).toBe('')
+    const known = [...BUILT_IN_CRITERION_SETS.map((b) => b.spec.id), 'none'].join(', ')
+    expect(r.err).toBe(`[cli] --criteria: unknown criterion set "no-such-set" (known: ${known})\n`)
+    expect(known).toContain('asce7-16')
   })
 
   it('prints the eccentric box JSON with the hand-calculated centres (--json)', () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { CAUTION } from '@/model'
-import { buildResultTables, csvCell, csvField, csvFileName, csvHeader, fileSlug, reportFileName, toCsv } from '@/report'
+import { buildResultTables, csvCell, csvField, csvFileName, csvHeader, csvTextField, fileSlug, reportFileName, toCsv } from '@/report'
 import type { ResultTable } from '@/report'
 import { demoCase } from './fixtures'
 
@@ -85,7 +85,40 @@ describe('csvField', () => {
   })
 })
 
+describe('csvTextField', () => {
+  // OWASP "CSV Injection": cells starting with = + - @ tab or CR get a leading single quote and
+  // are wrapped in double quotes (inner double quotes doubled, RFC 4180 2.7).
+  it.each([
+    ['=', '=SUM(A1:A9)', `"'=SUM(A1:A9)"`],
+    ['+', '+1+cmd', `"'+1+cmd"`],
+    ['-', '-2+3', `"'-2+3"`],
+    ['@', '@SUM(1)', `"'@SUM(1)"`],
+    ['tab', '\t=1', `"'\t=1"`],
+    ['CR', '\r=1', `"'\r=1"`],
+  ])('neutralises text that starts with %s', (_c, text, expected) => {
+    expect(csvTextField(text)).toBe(expected)
+  })
+
+  it('doubles inner quotes of a neutralised cell', () => {
+    expect(csvTextField('=HYPERLINK("http://example.invalid")')).toBe(`"'=HYPERLINK(""http://example.invalid"")"`)
+  })
+
+  it('leaves other text as csvField writes it', () => {
+    expect(csvTextField('Level 1')).toBe('Level 1')
+    expect(csvTextField('a=b')).toBe('a=b')
+    expect(csvTextField('a,=b')).toBe('"a,=b"')
+    expect(csvTextField(' =1')).toBe(' =1')
+    expect(csvTextField('-inf')).toBe('-inf')
+  })
+})
+
 describe('csvCell', () => {
+  it('keeps a negative number a plain number, not neutralised text', () => {
+    expect(csvCell(-1.5)).toBe('-1.5')
+    expect(csvCell(-0)).toBe('0')
+    expect(csvCell('-1.5')).toBe(`"'-1.5"`)
+  })
+
   it('writes numbers at full precision and null as an empty field', () => {
     // Shortest round-trip decimal of a double (ECMA-262 Number::toString).
     expect(csvCell(0.1 + 0.2)).toBe('0.30000000000000004')
@@ -112,11 +145,42 @@ describe('toCsv', () => {
 
   it('starts with a # comment holding the project name, the title and the caution', () => {
     const text = toCsv(tiny([]), { name: 'Tower\nA, "B"' })
-    const first = text.split('\r\n')[0] ?? ''
-    expect(first.startsWith('# ')).toBe(true)
-    expect(first).toContain('Tower A, "B"')
-    expect(first).toContain('Tiny, with a comma')
-    expect(first).toContain(CAUTION)
+    // The comment line is one RFC 4180 field, quoted because it holds commas and quotes.
+    const first = parseRfc4180(text)[0] ?? []
+    expect(first).toHaveLength(1)
+    expect(first[0]?.startsWith('# ')).toBe(true)
+    expect(first[0]).toContain('Tower A, "B"')
+    expect(first[0]).toContain('Tiny, with a comma')
+    expect(first[0]).toContain(CAUTION)
+    expect(toCsv(tiny([]), { name: 'Plain' }).startsWith('"# Plain | Tiny, with a comma | ')).toBe(true)
+  })
+
+  it('keeps a formula after a comma in the project name inside the one comment field (CSV injection)', () => {
+    const text = toCsv(tiny([]), { name: 'Tower,=HYPERLINK("http://example.invalid","x"),@SUM(1)' })
+    const first = parseRfc4180(text)[0] ?? []
+    expect(first).toHaveLength(1)
+    expect(first[0]).toMatch(/^# Tower,=HYPERLINK/)
+  })
+
+  it('neutralises text cells and keeps numbers numbers in a whole table (CSV injection)', () => {
+    const rows: ResultTable['rows'] = [
+      ['=1+1', -1.5],
+      ['-cmd', -0.25],
+      ['+x', 3],
+      ['@SUM(A1)', -1e-7],
+      ['X-e', null],
+    ]
+    const records = parseRfc4180(toCsv(tiny(rows), { name: 'P' }))
+    expect(records.slice(2)).toEqual([
+      ["'=1+1", '-1.5'],
+      ["'-cmd", '-0.25'],
+      ["'+x", '3'],
+      ["'@SUM(A1)", '-1e-7'],
+      ['X-e', ''],
+    ])
+    const lines = toCsv(tiny(rows), { name: 'P' }).split('\r\n')
+    expect(lines[2]).toBe(`"'=1+1",-1.5`)
+    expect(lines[5]).toBe(`"'@SUM(A1)",-1e-7`)
   })
 
   it('round-trips the RFC 4180 examples through an independent reader', () => {

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest'
 import { analyzeProject } from '@/engine'
 import type { BalanceResult } from '@/engine'
 import { CAUTION, CAUTION_SHORT, parseProjectText } from '@/model'
-import { buildReportHtml, cssString, escapeHtml, formatTimestamp } from '@/report'
+import { buildReportHtml, escapeHtml, formatTimestamp } from '@/report'
 import { demoCase } from './fixtures'
 
 const AT = new Date('2026-12-02T04:00:00Z')
@@ -82,7 +82,7 @@ describe('buildReportHtml', () => {
     expect(html).toContain('clause (all rows): ASCE/SEI 7-16 Table 12.3-1 Type 1a')
   })
 
-  it('escapes markup in the project name everywhere, including the CSS page header', () => {
+  it('escapes markup in the project name everywhere, including the printed page header', () => {
     const { project, result } = demoCase()
     const evil = { ...project, name: '<script>alert("x")</script> & </style><b>' }
     const html = buildReportHtml(evil, result, { unitSystem: 'SI', generatedAt: AT })
@@ -161,12 +161,6 @@ describe('buildReportHtml', () => {
 describe('escapeHtml', () => {
   it('escapes the five HTML special characters', () => {
     expect(escapeHtml(`<a href="x">'&'</a>`)).toBe('&lt;a href=&quot;x&quot;&gt;&#39;&amp;&#39;&lt;/a&gt;')
-  })
-})
-
-describe('cssString', () => {
-  it('escapes quotes, backslashes and < (CSS Syntax Level 3, 4.3.7 escapes)', () => {
-    expect(cssString('a"b\\c</style>')).toBe('"a\\"b\\\\c\\3C /style>"')
   })
 })
 
