@@ -8,6 +8,20 @@ export { balanceScore, suggestBalance } from './balance'
 export { BUILT_IN_CRITERION_SETS } from './criteria'
 export type { BuiltInCriterionSet } from './criteria'
 export { GRAVITY, spectralAcceleration } from './spectra'
+export type {
+  AmplifiedCase,
+  DesignDriftRow,
+  DesignFactors,
+  DesignResult,
+  ElfDirection,
+  IrregularityConsequence,
+  SpectrumDesignDriftRow,
+  SpectrumScaling,
+  SpectrumScalingDirection,
+  StabilityRow,
+  StoryStiffnessRow,
+  TorsionalFlexibility,
+} from './design/types'
 export type { BalanceAction, BalanceOptions, BalanceResult, BalanceSuggestion } from './balance'
 export type {
   AnalysisOptions,

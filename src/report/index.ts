@@ -9,6 +9,7 @@
  */
 export { TABLE_IDS, buildResultTables, describeSpectrum, verdictText, worstVerdict } from './tables'
 export type { ResultTable, TableCell, TableColumn, TableId } from './tables'
+export { DESIGN_TABLE_IDS, designBaseShearTable, designDetailTables } from './designTables'
 export { csvCell, csvField, csvHeader, toCsv } from './csv'
 export { csvFileName, fileSlug, reportFileName } from './fileNames'
 export { buildReportHtml, formatTimestamp } from './reportHtml'

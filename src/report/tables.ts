@@ -12,6 +12,7 @@ import type {
 } from '@/engine'
 import { CAUTION, elementFloorRange, toDisplay, unitLabel } from '@/model'
 import type { Project, Quantity, UnitSystem } from '@/model'
+import { DESIGN_TABLE_IDS, designBaseShearTable, designDetailTables } from './designTables'
 
 /** One column: a machine key, a short label and the display unit ('' for pure numbers and text). */
 export interface TableColumn {
@@ -41,9 +42,11 @@ export interface ResultTable {
 export const TABLE_IDS = [
   'floors',
   'modes',
+  'design-base-shear',
   'torsion',
   'torsion-rules',
   'regularity',
+  ...DESIGN_TABLE_IDS.slice(1),
   'spectrum-floors',
   'spectrum-base',
   'time-history',
@@ -431,7 +434,7 @@ export function buildResultTables(
   units: UnitSystem,
 ): ResultTable[] {
   const tables: (ResultTable | null)[] = [floorsTable(project, result, units), modesTable(result)]
-  tables.push(torsionTable(result, units))
+  tables.push(designBaseShearTable(result, units), torsionTable(result, units))
   const t = result.torsion
   if (t && t.criterion.rows.length > 0) {
     tables.push(
@@ -459,6 +462,7 @@ export function buildResultTables(
       ),
     )
   }
+  tables.push(...designDetailTables(result, units))
   tables.push(spectrumFloorsTable(result, units), spectrumBaseTable(result, units))
   tables.push(timeHistoryTable(result, units))
   return tables.filter((x): x is ResultTable => x !== null)
