@@ -74,6 +74,7 @@ export {
   EN1998_SYSTEM_PRESETS,
   damageLimitationNuOf,
   importanceFactorOf,
+  readSeismicDesign,
 } from './seismicDesign'
 export type {
   Asce7DriftRow,
@@ -85,5 +86,6 @@ export type {
   RiskCategory,
   SeismicDesign,
   SeismicDesignCategory,
+  SeismicReadMessages,
   SeismicSystemPreset,
 } from './seismicDesign'

@@ -39,6 +39,7 @@ import type { FloorActions } from './FloorStack'
 import { floorOverlay } from './floorOverlay'
 import { useAnalysis } from './hooks/useAnalysis'
 import { useEditor, useEditorPick } from './hooks/useEditor'
+import { SeismicSystemForm } from './SeismicSystemForm'
 import { Inspector } from './Inspector'
 import type { InspectedKind } from './Inspector'
 import { PlanCanvas } from './PlanCanvas'
@@ -536,6 +537,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
               copyMessage={null}
             />
           </ErrorBoundary>
+          <ErrorBoundary name="Seismic system"><SeismicSystemForm store={store} result={viewerResult} units={units} /></ErrorBoundary>
           <ErrorBoundary name="Balance">
             <BalancePanel project={doc} onApply={onApplyBalance} />
           </ErrorBoundary>
