@@ -29,6 +29,7 @@ import type {
 } from '@/model'
 import { CautionNote } from './extras/CautionNote'
 import { useEditor } from './hooks/useEditor'
+import './seismicForm.css'
 
 export interface SeismicSystemFormProps {
   readonly store: EditorStore
@@ -130,10 +131,11 @@ const CATEGORIES = [
 export function SeismicSystemForm({ store, result, units }: SeismicSystemFormProps) {
   const settings = useEditor(store, (s) => s.doc.settings)
   const [message, setMessage] = useState<string | null>(null)
-  const apply = (patch: Partial<AnalysisSettings> | { seismicDesign: undefined }): string | null => {
+  // A number box shows its own refusal; choices show theirs below the form.
+  const apply = (patch: Partial<AnalysisSettings> | { seismicDesign: undefined }, fromBox: boolean): string | null => {
     const r = execute(store, 'setAnalysisSettings', { patch })
     const msg = r.ok ? null : r.message
-    setMessage(msg)
+    setMessage(fromBox ? null : msg)
     return msg
   }
   return (
@@ -142,8 +144,8 @@ export function SeismicSystemForm({ store, result, units }: SeismicSystemFormPro
       result={result}
       units={units}
       message={message}
-      onDesign={(d) => apply({ seismicDesign: d } as Partial<AnalysisSettings>)}
-      onLimit={(v) => apply({ torsionalFlexibilityLimit: v })}
+      onDesign={(d, fromBox) => apply({ seismicDesign: d } as Partial<AnalysisSettings>, fromBox === true)}
+      onLimit={(v) => apply({ torsionalFlexibilityLimit: v }, true)}
     />
   )
 }
@@ -154,7 +156,7 @@ export interface SeismicSystemFormViewProps {
   readonly units: UnitSystem
   readonly message: string | null
   /** Set (or clear with undefined) settings.seismicDesign; returns a refusal message or null. */
-  readonly onDesign: (d: SeismicDesign | undefined) => string | null
+  readonly onDesign: (d: SeismicDesign | undefined, fromBox?: boolean) => string | null
   readonly onLimit: (v: number) => string | null
 }
 
@@ -209,10 +211,10 @@ function presetOptions(list: readonly { id: string; name: string }[]): readonly 
   return [[FREE, 'values entered below'], ...list.map((p) => [p.id, p.name] as const)]
 }
 
-function AsceFields({ design, onDesign }: { design: Asce7SeismicDesign; onDesign: (d: SeismicDesign) => string | null }) {
+function AsceFields({ design, onDesign }: { design: Asce7SeismicDesign; onDesign: (d: SeismicDesign, fromBox?: boolean) => string | null }) {
   const system = (key: 'systemX' | 'systemY', label: string) => {
     const s = design[key]
-    const set = (next: Asce7System): string | null => onDesign({ ...design, [key]: next })
+    const set = (next: Asce7System, fromBox = false): string | null => onDesign({ ...design, [key]: next }, fromBox)
     const field = (f: 'R' | 'Cd' | 'Omega0' | 'Ct' | 'x', text: string) => (
       <NumberBox
         key={f}
@@ -221,7 +223,7 @@ function AsceFields({ design, onDesign }: { design: Asce7SeismicDesign; onDesign
         testId={`seismic-${key}-${f}`}
         onCommit={(v) => {
           const { preset: _drop, ...rest } = s
-          return set({ ...rest, [f]: v })
+          return set({ ...rest, [f]: v }, true)
         }}
       />
     )
@@ -266,7 +268,7 @@ function AsceFields({ design, onDesign }: { design: Asce7SeismicDesign; onDesign
   )
 }
 
-function EnFields({ design, onDesign }: { design: En1998SeismicDesign; onDesign: (d: SeismicDesign) => string | null }) {
+function EnFields({ design, onDesign }: { design: En1998SeismicDesign; onDesign: (d: SeismicDesign, fromBox?: boolean) => string | null }) {
   const system = (key: 'systemX' | 'systemY', label: string) => {
     const s = design[key]
     return (
@@ -282,7 +284,7 @@ function EnFields({ design, onDesign }: { design: En1998SeismicDesign; onDesign:
             if (p) onDesign({ ...design, [key]: { preset: p.id, ...p.values } })
           }}
         />
-        <NumberBox label="q" value={s.q} testId={`seismic-${key}-q`} onCommit={(v) => onDesign({ ...design, [key]: { q: v } })} />
+        <NumberBox label="q" value={s.q} testId={`seismic-${key}-q`} onCommit={(v) => onDesign({ ...design, [key]: { q: v } }, true)} />
       </fieldset>
     )
   }
