@@ -23,7 +23,8 @@ export function elfLoading(elf: { x: ElfDirection; y: ElfDirection }): StaticLoa
   const of = (e: ElfDirection): NonNullable<StaticLoading['x']> => ({
     periodUsed: e.periodUsed,
     exponent: e.exponent,
-    coefficient: e.coefficient,
+    // V / W (for EN this includes lambda, so it is not Sd alone).
+    coefficient: e.seismicWeight > 0 ? e.baseShear / e.seismicWeight : e.coefficient,
     baseShear: e.baseShear,
     forces: e.forces,
   })
@@ -69,6 +70,8 @@ export function runDesign(input: {
       ? [
           'Design drifts delta = Cd delta_e / Ie (12.8.6) at the extreme points of each floor, accidental torsion with Ax = 1.',
           `P for the stability coefficient: ${gravityLoadRatio} x the seismic weight on and above the story (the seismic weight is used as the gravity load unless settings.seismicDesign.gravityLoadRatio says otherwise).`,
+          '12.8.6 takes drifts at the centres of mass unless Type 1a/1b applies in SDC C-F; the extreme points used here are the more demanding reading.',
+          'Moment frames in SDC D-F check Delta_a / rho (12.12.1.1, from memory): not applied here.',
           'Cs limits of 12.8.1.3 (Ss cap for regular short buildings) are not applied.',
           'Preset system values (Table 12.2-1, Table 12.8-2) are from memory until checked.',
         ]

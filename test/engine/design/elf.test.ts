@@ -178,5 +178,7 @@ describe('computeElf through analyzeProject', () => {
     const zm = r.floors.map((f) => f.elevation * f.mass)
     const sum = zm.reduce((a, b) => a + b, 0)
     d.y.forces.forEach((F, i) => expect(F / d.y.baseShear).toBeCloseTo(zm[i]! / sum, 12))
+    // the static cases report V / W = Sd lambda (in g)
+    expect(r.torsion!.baseShearCoefficient!.y).toBeCloseTo(Sd * lambda, 12)
   })
 })
