@@ -64,7 +64,10 @@ describe('irregularityConsequences', () => {
     const e = irregularityConsequences(found, 'E')
     const notPermitted = e.find((c) => c.clause.endsWith('12.3.3.1') && c.irregularity === 'Horizontal Type 1b')!
     expect(notPermitted.applies).toBe(true)
-    expect(irregularityConsequences(found, 'C').find((c) => c === undefined || (c.clause.endsWith('12.3.3.1') && c.irregularity === 'Horizontal Type 1b'))!.applies).toBe(false)
+    const inC = irregularityConsequences(found, 'C').find((c) => c.clause.endsWith('12.3.3.1') && c.irregularity === 'Horizontal Type 1b')!
+    expect(inC.applies).toBe(false)
+    // ASCE/SEI 7-16 12.8.4.3 (from memory): Ax applies from SDC C
+    expect(irregularityConsequences(found, 'C').find((c) => c.clause.endsWith('12.8.4.3'))!.applies).toBe(true)
     // no category: applies is unknown (null); vertical rows not found
     const none = irregularityConsequences(found, undefined)
     expect(none.every((c) => c.applies === null)).toBe(true)
