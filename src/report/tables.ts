@@ -263,6 +263,9 @@ function torsionTable(result: AnalysisResult, units: UnitSystem): ResultTable | 
   const notes = [
     `Equivalent static loads in X and Y with the centre of mass moved by ±${fmtPlain(100 * t.eccentricityFraction)}% of the plan extent across the load${source}; story n lies below floor n.`,
     'drift max: largest story drift along the load at the slab outline corners; drift avg: mean of the drifts at the two ends across the load.',
+    result.design
+      ? 'Drifts are elastic under the design base shear (before Cd/Ie or q); design drifts and limits are in the design drift table.'
+      : 'No seismic system is set: drifts are elastic under V = Sa(T)·W with R = 1 and no period cap, not design drifts.',
     `Verdict: the governing pass/fail rule of the criterion set for that story and case; overall ${verdictText(t.criterion.overall)}.`,
     ...criterionNotes(t.criterion),
   ]

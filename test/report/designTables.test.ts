@@ -69,8 +69,11 @@ describe('design tables', () => {
     expect(html.indexOf('table-design-base-shear')).toBeLessThan(html.indexOf('id="table-torsion"'))
   })
 
-  it('adds no design table when no seismic system is set', () => {
+  it('adds no design table when no seismic system is set, and says the drifts are elastic', () => {
     const plain = analyzeProject(base)
-    expect(buildResultTables(base, plain, 'SI').some((t) => t.id.startsWith('design-'))).toBe(false)
+    const tables = buildResultTables(base, plain, 'SI')
+    expect(tables.some((t) => t.id.startsWith('design-'))).toBe(false)
+    expect(get(tables, 'torsion').notes.some((n) => n.includes('not design drifts'))).toBe(true)
+    expect(get(buildResultTables(project, result, 'SI'), 'torsion').notes.some((n) => n.includes('design drift table'))).toBe(true)
   })
 })
