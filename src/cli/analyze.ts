@@ -1,5 +1,5 @@
 /**
- * Node entry: `npm run analyze -- [model.json] [--json] [--time-history] [--criteria <id>] [--units SI|US] [--balance] [--report file.html] [--csv folder]`.
+ * Node entry: `npm run analyze -- [model.json] [--json] [--time-history] [--criteria <id>] [--units SI|US] [--balance] [--report file.html] [--csv folder] [--system preset[,presetY]] [--risk-category I..IV]`.
  * Reads a project file, validates it, runs the engine and prints a summary (or the full JSON result).
  * Exit codes: 0 analysis completed, 1 invalid model or arguments (including an output path that cannot
  * be written or would overwrite the model, and an unknown --criteria id), 2 mechanism, 3 internal error.
@@ -13,6 +13,7 @@ import { BUILT_IN_CRITERION_SETS, analyzeProject, suggestBalance } from '@/engin
 import type { AnalysisOptions } from '@/engine'
 import { CAUTION, parseProjectText } from '@/model'
 import { TABLE_IDS, buildReportHtml, buildResultTables, csvFileName, toCsv } from '@/report'
+import { seismicDesignFromOption } from './seismicOption'
 import { USAGE, parseArgs } from './args'
 import { findDuplicateKeys } from './duplicateKeys'
 import { canonicalPath, outputProblem, probeNodePath } from './outputTargets'
@@ -120,6 +121,15 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
     io.err(`[file] warning: ${d.path}: the key appears ${d.count} times in one object; only the last value is used\n`)
   }
   for (const w of parsed.warnings) io.err(`[file] warning: ${w}\n`)
+  let project = parsed.project
+  if (o.system) {
+    const sd = seismicDesignFromOption(o.system, o.riskCategory ?? null)
+    if (!sd.ok) {
+      io.err(`${sd.error}\n`)
+      return EXIT_INVALID
+    }
+    project = { ...project, settings: { ...project.settings, seismicDesign: sd.design } }
+  }
 
   const options: AnalysisOptions = {
     timeHistory: o.timeHistory,
@@ -127,7 +137,7 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
   }
   let result
   try {
-    result = analyzeProject(parsed.project, options)
+    result = analyzeProject(project, options)
   } catch (error) {
     io.err(`[cli] internal error while analyzing ${file}: ${(error as Error).message}\n${CAUTION}\n`)
     return EXIT_INTERNAL
@@ -144,7 +154,7 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
     }
   }
   try {
-    const balance = o.balance && result.status === 'ok' ? suggestBalance(parsed.project) : null
+    const balance = o.balance && result.status === 'ok' ? suggestBalance(project) : null
     if (o.json) {
       // The balance suggestions ride along as one extra top-level field (docs/results-format.md).
       io.out(formatResultJson(balance ? { ...result, balance } : result))
@@ -153,7 +163,7 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
       if (balance) io.out(`\n${formatBalance(balance)}`)
     }
     if (o.report !== null) {
-      const html = buildReportHtml(parsed.project, result, {
+      const html = buildReportHtml(project, result, {
         unitSystem: o.units,
         generatedAt: new Date(),
         ...(balance ? { balance } : {}),
@@ -162,8 +172,8 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
       io.err(`[cli] report written to ${o.report}\n`)
     }
     if (o.csv !== null) {
-      const tables = buildResultTables(parsed.project, result, o.units)
-      for (const t of tables) write(join(o.csv, csvFileName(parsed.project, t)), toCsv(t, parsed.project))
+      const tables = buildResultTables(project, result, o.units)
+      for (const t of tables) write(join(o.csv, csvFileName(project, t)), toCsv(t, project))
       io.err(`[cli] ${tables.length} CSV tables written to ${o.csv}\n`)
     }
   } catch (error) {

@@ -15,6 +15,10 @@ export interface CliOptions {
   readonly report: string | null
   /** Write every result table as CSV into this folder. */
   readonly csv: string | null
+  /** Seismic system presets for this run (`X[,Y]`), replacing settings.seismicDesign. */
+  readonly system?: string | null
+  /** Risk category / importance class with --system (default II). */
+  readonly riskCategory?: string | null
 }
 
 export type ArgsResult = { readonly ok: true; readonly options: CliOptions } | { readonly ok: false; readonly error: string }
@@ -32,6 +36,9 @@ options:
   --balance            also ask the balance assistant which element to move, lengthen or thicken
   --report <file>      also write the printable HTML report (open it in a browser and print)
   --csv <folder>       also write every result table as a CSV file into the folder
+  --system <p>[,<pY>]  seismic system preset(s) for X (and Y) for this run, e.g. special-rc-walls-frame
+                       (design-level base shear and drifts; see docs/criteria.md)
+  --risk-category <c>  I, II, III or IV with --system (default II)
   -h, --help           show this text
 
 exit codes: 0 analysis completed, 1 invalid model, arguments or output path, 2 mechanism, 3 internal error`
@@ -47,6 +54,8 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
   let balance = false
   let report: string | null = null
   let csv: string | null = null
+  let system: string | null = null
+  let riskCategory: string | null = null
   for (let i = 0; i < argv.length; i++) {
     const arg = argv[i] as string
     const [name, inline] = arg.startsWith('--') && arg.includes('=') ? arg.split(/=(.*)/s, 2) : [arg, undefined]
@@ -79,6 +88,18 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
         csv = v
         break
       }
+      case '--system': {
+        const v = value()
+        if (!v) return { ok: false, error: '[cli] --system needs a preset id, e.g. --system special-rc-walls-frame' }
+        system = v
+        break
+      }
+      case '--risk-category': {
+        const v = value()
+        if (!v) return { ok: false, error: '[cli] --risk-category needs I, II, III or IV' }
+        riskCategory = v
+        break
+      }
       case '--criteria': {
         const v = value()
         if (!v) return { ok: false, error: '[cli] --criteria needs a criterion set id, e.g. --criteria asce7-16' }
@@ -103,5 +124,7 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
         file = arg
     }
   }
-  return { ok: true, options: { file, json, timeHistory, criteria, units, help, balance, report, csv } }
+  if (riskCategory !== null && system === null) return { ok: false, error: '[cli] --risk-category needs --system' }
+  const seismic = { ...(system !== null ? { system } : {}), ...(riskCategory !== null ? { riskCategory } : {}) }
+  return { ok: true, options: { file, json, timeHistory, criteria, units, help, balance, report, csv, ...seismic } }
 }

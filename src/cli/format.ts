@@ -14,6 +14,7 @@ import type {
 import { scopeLine } from '@/engine'
 import { CAUTION, formatNumber, toDisplay, unitLabel } from '@/model'
 import type { Quantity, UnitSystem } from '@/model'
+import { designDetailSection, designLeadSection } from './formatDesign'
 
 type Align = 'left' | 'right'
 
@@ -332,8 +333,11 @@ export function formatSummary(result: AnalysisResult, units: UnitSystem = 'SI'):
   ]
   if (result.status === 'ok') {
     parts.push('', modesSection(result))
+    parts.push('', designLeadSection(result, units))
     parts.push('', result.torsion ? torsionSection(result.torsion, result, units) : 'Torsion check: not computed')
     parts.push('', regularitySection(result))
+    const design = designDetailSection(result, units)
+    if (design) parts.push('', design)
     parts.push('', spectrumSection(result, units))
     const th = timeHistorySection(result, units)
     if (th) parts.push('', th)
@@ -364,6 +368,7 @@ const JSON_LEAD = [
   'modes',
   'torsion',
   'regularity',
+  'design',
   'spectrum',
   'timeHistory',
   'timings',

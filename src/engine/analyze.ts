@@ -8,6 +8,7 @@ import { buildStructure } from './assemble'
 import { computeCentres } from './centres'
 import { centreDefinitionIssues } from './centreDefinition'
 import { evaluateRegularity, resolveCriterionSet } from './criteria'
+import { computeElf, elfLoading, runDesign } from './design'
 import { runStaticTorsion } from './loads'
 import { solveModes } from './modal'
 import type { AnalysisOptions, AnalysisResult, Issue } from './results'
@@ -45,6 +46,7 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
     spectrum: null,
     timeHistory: null,
     regularity: null,
+    design: null,
     caution: CAUTION,
     timings,
   }
@@ -95,7 +97,12 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
 
   const criterion = resolveCriterionSet(project.settings, options.criterionSet)
   issues.push(...criterion.issues)
-  const torsion = runStaticTorsion(structure, solver.solver, modes, project.settings, criterion.set)
+  const seismic = project.settings.seismicDesign
+  const elf = seismic ? computeElf(structure, modes, seismic, project.settings.spectrum) : null
+  if (elf) issues.push(...elf.issues)
+  else issues.push(ELASTIC_ONLY)
+  const loading = elf?.elf ? elfLoading(elf.elf) : undefined
+  const torsion = runStaticTorsion(structure, solver.solver, modes, project.settings, criterion.set, loading)
   lap('torsion')
   const regularity = criterion.set ? evaluateRegularity(structure, centres, criterion.set) : null
 
@@ -109,6 +116,21 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
   lap('elementForces')
   const timeHistory = options.timeHistory ? runTimeHistory(structure, modes, project.settings) : null
   if (options.timeHistory) lap('timeHistory')
+  const design =
+    seismic && elf?.elf
+      ? runDesign({
+          structure,
+          solver: solver.solver,
+          modes,
+          settings: project.settings,
+          set: criterion.set,
+          design: seismic,
+          elf: elf.elf,
+          torsion,
+          spectrum,
+        })
+      : null
+  lap('design')
 
   return {
     ...base,
@@ -121,5 +143,16 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
     spectrum,
     timeHistory,
     elementForces,
+    design,
   }
+}
+
+/** Said when no seismic system is set: the absolute numbers are elastic, not design numbers. */
+const ELASTIC_ONLY: Issue = {
+  code: 'not-applicable',
+  severity: 'info',
+  message:
+    '[engine] settings.seismicDesign not set: base shear V = Sa(T)·W with R = 1 and no period cap; ' +
+    'drifts are elastic, not design drifts (see docs/criteria.md "Design-level numbers")',
+  refs: [],
 }

@@ -9,6 +9,20 @@ export { BUILT_IN_CRITERION_SETS, scopeLine } from './criteria'
 export { centreDefinitionIssues } from './centreDefinition'
 export type { BuiltInCriterionSet } from './criteria'
 export { GRAVITY, spectralAcceleration } from './spectra'
+export type {
+  AmplifiedCase,
+  DesignDriftRow,
+  DesignFactors,
+  DesignResult,
+  ElfDirection,
+  IrregularityConsequence,
+  SpectrumDesignDriftRow,
+  SpectrumScaling,
+  SpectrumScalingDirection,
+  StabilityRow,
+  StoryStiffnessRow,
+  TorsionalFlexibility,
+} from './design/types'
 export type { BalanceAction, BalanceOptions, BalanceResult, BalanceSuggestion } from './balance'
 export type {
   AnalysisOptions,

@@ -215,11 +215,23 @@ export function verticalDistribution(
 }
 
 /**
+ * Design loading that replaces the elastic default of `runStaticTorsion`: per direction the ELF base
+ * shear and its floor forces, and per case optional accidental-torsion amplifiers per floor (Ax,
+ * multiplying the eccentricity).
+ */
+export interface StaticLoading {
+  readonly x?: { periodUsed: number; exponent: number; coefficient: number; baseShear: number; forces: Float64Array }
+  readonly y?: { periodUsed: number; exponent: number; coefficient: number; baseShear: number; forces: Float64Array }
+  readonly amplifiers?: Partial<Record<StaticCaseId, ArrayLike<number>>>
+}
+
+/**
  * The four equivalent static cases with accidental torsion, drift ratios and criterion checks.
  *
  * Base shear: V = C W with W = total weight and C = Sa(T) of the project spectrum at the dominant
  * period of that direction, with R = 1 (elastic); if that ordinate is not positive, C = 1. The
- * ratios, the drift index divided by V, and the verdicts do not depend on V.
+ * ratios, the drift index divided by V, and the verdicts do not depend on V. With `loading` (the
+ * design ELF forces, src/engine/design) V, T, k and the forces are those given instead.
  * Load points: CM of each floor moved by ± fraction × the floor's own extent perpendicular to the
  * load (X+e towards +y, Y+e towards +x).
  */
@@ -229,12 +241,15 @@ export function runStaticTorsion(
   modes: ModalResult,
   settings: AnalysisSettings,
   set: CriterionSetSpec | null,
+  loading?: StaticLoading,
 ): StaticTorsionResult {
   const n = structure.floorCount
   const { fraction, source } = eccentricityFraction(settings, set)
   const W = structure.totalMass * GRAVITY
   type DirectionLoads = { T: number; k: number; C: number; V: number; forces: Float64Array }
   const perDir = (d: Direction): DirectionLoads => {
+    const given = loading?.[d]
+    if (given) return { T: given.periodUsed, k: given.exponent, C: given.coefficient, V: given.baseShear, forces: given.forces }
     const T = dominantPeriod(modes, d)
     const k = verticalDistributionExponent(T)
     const sa = spectralAcceleration(settings.spectrum, T, settings.damping)
@@ -247,13 +262,15 @@ export function runStaticTorsion(
   const cases: StaticLoadCase[] = CASES.map(({ id, direction, sign }) => {
     const { forces } = dirs[direction]
     const rhs = new Float64Array(3 * n)
+    const amplifier = loading?.amplifiers?.[id]
     const loadPoints: Point[] = structure.floors.map((f, i) => {
       const cm = f.centreOfMass
       const e = f.extent
+      const a = fraction * (amplifier?.[i] ?? 1)
       const p =
         direction === 'x'
-          ? { x: cm.x, y: cm.y + sign * fraction * (e.maxY - e.minY) }
-          : { x: cm.x + sign * fraction * (e.maxX - e.minX), y: cm.y }
+          ? { x: cm.x, y: cm.y + sign * a * (e.maxY - e.minY) }
+          : { x: cm.x + sign * a * (e.maxX - e.minX), y: cm.y }
       const F = forces[i]!
       // Force through p, moment about O: x*Fy - y*Fx.
       if (direction === 'x') {

@@ -7,6 +7,7 @@
  * mechanics work, the "torsion/spectrum/time history/criteria" sections to the loads work.
  */
 import type { Point, SpectrumModeRule, SpectrumSpec } from '@/model'
+import type { DesignResult } from './design/types'
 
 // ---------------------------------------------------------------- issues
 
@@ -250,7 +251,7 @@ export interface StaticTorsionResult {
   readonly eccentricityFraction: number
   /** Where the eccentricity fraction came from: the criterion set's own value or the settings. */
   readonly eccentricitySource?: 'criterion-set' | 'settings'
-  /** Base-shear coefficient V / W in each direction, - (Sa(T) in g with R = 1). */
+  /** Base-shear coefficient V / W in each direction, - (Sa(T) in g with R = 1; the design Cs or Sd(T1) with settings.seismicDesign). */
   readonly baseShearCoefficient?: { readonly x: number; readonly y: number }
   readonly cases: readonly StaticLoadCase[]
   readonly criterion: CriterionEvaluation
@@ -455,6 +456,8 @@ export interface AnalysisResult {
   readonly regularity: CriterionEvaluation | null
   /** Element storey shears and overturning moments (static cases and spectrum); absent if not run. */
   readonly elementForces?: ElementForcesResult | null
+  /** Design-level numbers (ELF, design drifts, ...) when settings.seismicDesign is given, else null. */
+  readonly design?: DesignResult | null
   /** Always present: results are preliminary. */
   readonly caution: string
   /** Wall-clock milliseconds per stage (informative). */

@@ -71,3 +71,24 @@ export {
 } from './units'
 export type { Quantity, UnitSystem } from './units'
 export { demoProject } from './demo'
+export {
+  ASCE7_SYSTEM_PRESETS,
+  DEFAULT_TORSIONAL_FLEXIBILITY_LIMIT,
+  EN1998_SYSTEM_PRESETS,
+  damageLimitationNuOf,
+  importanceFactorOf,
+  readSeismicDesign,
+} from './seismicDesign'
+export type {
+  Asce7DriftRow,
+  Asce7SeismicDesign,
+  Asce7System,
+  En1998NonStructural,
+  En1998SeismicDesign,
+  En1998System,
+  RiskCategory,
+  SeismicDesign,
+  SeismicDesignCategory,
+  SeismicReadMessages,
+  SeismicSystemPreset,
+} from './seismicDesign'

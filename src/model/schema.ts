@@ -9,6 +9,7 @@ import type { FloorId } from './ids'
 import { migrateDocument } from './migrations'
 import { STIFFNESS_FACTOR_DEFAULTS } from './stiffnessFactors'
 import type { RawDocument } from './migrations'
+import { readSeismicDesign } from './seismicDesign'
 import type {
   AnalysisSettings,
   BaseRef,
@@ -939,12 +940,13 @@ function readSpectrum(ctx: Ctx, p: string, v: unknown): SpectrumSpec | undefined
   const gRule = { gt: 0, max: LIMITS.spectrumMax }
   switch (kind) {
     case 'asce7': {
-      const o = object(ctx, p, v, ['kind', 'SDS', 'SD1', 'TL'])!
+      const o = object(ctx, p, v, ['kind', 'SDS', 'SD1', 'TL', 'S1'])!
       const SDS = num(ctx, key(p, 'SDS'), o.SDS, gRule)
       const SD1 = num(ctx, key(p, 'SD1'), o.SD1, gRule)
       const TL = num(ctx, key(p, 'TL'), o.TL, { gt: 0, max: LIMITS.periodMax })
+      const S1 = o.S1 === undefined ? undefined : num(ctx, key(p, 'S1'), o.S1, { min: 0, max: LIMITS.spectrumMax })
       if (ctx.errors.length > before) return undefined
-      return { kind, SDS: SDS as number, SD1: SD1 as number, TL: TL as number }
+      return { kind, SDS: SDS as number, SD1: SD1 as number, TL: TL as number, ...(S1 !== undefined ? { S1 } : {}) }
     }
     case 'en1998-1': {
       const o = object(ctx, p, v, ['kind', 'ag', 'ground'])!
@@ -1105,6 +1107,8 @@ const SETTINGS_FIELDS = [
   'baseShearTarget',
   'spectrumModes',
   'groundMotion',
+  'seismicDesign',
+  'torsionalFlexibilityLimit',
 ] as const
 
 function readSettings(ctx: Ctx, v: unknown): AnalysisSettings | undefined {
@@ -1170,6 +1174,12 @@ function readSettings(ctx: Ctx, v: unknown): AnalysisSettings | undefined {
       : oneOf(ctx, 'settings.spectrumModes', o.spectrumModes, ['full-mass', 'ninety-percent'] as const, 'full-mass')
   const groundMotion =
     o.groundMotion === undefined ? undefined : readGroundMotion(ctx, 'settings.groundMotion', o.groundMotion)
+  const seismicDesign =
+    o.seismicDesign === undefined ? undefined : readSeismicDesign(o.seismicDesign, 'settings.seismicDesign', ctx)
+  const torsionalFlexibilityLimit =
+    o.torsionalFlexibilityLimit === undefined
+      ? undefined
+      : num(ctx, 'settings.torsionalFlexibilityLimit', o.torsionalFlexibilityLimit, { gt: 0, max: 10 })
   if (ctx.errors.length > before) return undefined
   return {
     criterionSet: criterionSet as string,
@@ -1181,6 +1191,8 @@ function readSettings(ctx: Ctx, v: unknown): AnalysisSettings | undefined {
     ...(baseShearTarget !== undefined ? { baseShearTarget } : {}),
     ...(spectrumModes !== undefined ? { spectrumModes: spectrumModes as SpectrumModeRule } : {}),
     ...(groundMotion !== undefined ? { groundMotion } : {}),
+    ...(seismicDesign !== undefined ? { seismicDesign } : {}),
+    ...(torsionalFlexibilityLimit !== undefined ? { torsionalFlexibilityLimit } : {}),
   }
 }
 

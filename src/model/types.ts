@@ -14,6 +14,7 @@ import type {
   SlabId,
   WallId,
 } from './ids'
+import type { SeismicDesign } from './seismicDesign'
 
 /** A plan point, m. */
 export interface Point {
@@ -234,6 +235,8 @@ export type SpectrumSpec =
       readonly SD1: number
       /** long-period transition T_L, s */
       readonly TL: number
+      /** Optional mapped S_1, g: enables the ELF minimum 0.5 S1/(R/Ie) when S1 >= 0.6 g (12.8.1.1). */
+      readonly S1?: number
     }
   | {
       /** EN 1998-1 3.2.2.2 horizontal elastic spectrum, Type 1 recommended parameters. */
@@ -324,6 +327,10 @@ export interface AnalysisSettings {
    */
   readonly spectrumModes?: SpectrumModeRule
   readonly groundMotion?: GroundMotionSpec
+  /** Optional seismic system per direction and design-level factors (absent: elastic numbers, R = 1). */
+  readonly seismicDesign?: SeismicDesign
+  /** Flag torsional flexibility above this ratio of torsional to translational period, - (default 1.0). */
+  readonly torsionalFlexibilityLimit?: number
 }
 
 /** Mode rule of the response spectrum (see `AnalysisSettings.spectrumModes`). */

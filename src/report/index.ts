@@ -10,6 +10,7 @@
 export { TABLE_IDS, buildResultTables, describeSpectrum, verdictText, worstVerdict } from './tables'
 export type { ResultTable, TableCell, TableColumn, TableId } from './tables'
 export { csvCell, csvField, csvHeader, csvTextField, toCsv } from './csv'
+export { DESIGN_TABLE_IDS, designBaseShearTable, designDetailTables } from './designTables'
 export { csvFileName, fileSlug, reportFileName } from './fileNames'
 export { buildReportHtml, formatTimestamp } from './reportHtml'
 export type { ReportOptions } from './reportHtml'

@@ -12,6 +12,7 @@ import type {
 } from '@/engine'
 import { CAUTION, elementFloorRange, toDisplay, unitLabel } from '@/model'
 import type { Project, Quantity, UnitSystem } from '@/model'
+import { DESIGN_TABLE_IDS, designBaseShearTable, designDetailTables } from './designTables'
 
 /** One column: a machine key, a short label and the display unit ('' for pure numbers and text). */
 export interface TableColumn {
@@ -41,9 +42,11 @@ export interface ResultTable {
 export const TABLE_IDS = [
   'floors',
   'modes',
+  'design-base-shear',
   'torsion',
   'torsion-rules',
   'regularity',
+  ...DESIGN_TABLE_IDS.slice(1),
   'spectrum-floors',
   'spectrum-base',
   'spectrum-torsion',
@@ -263,6 +266,9 @@ function torsionTable(result: AnalysisResult, units: UnitSystem): ResultTable | 
   const notes = [
     `Equivalent static loads in X and Y with the centre of mass moved by ±${fmtPlain(100 * t.eccentricityFraction)}% of the plan extent across the load${source}; story n lies below floor n.`,
     'drift max: largest story drift along the load at the slab outline corners; drift avg: mean of the drifts at the two ends across the load.',
+    result.design
+      ? 'Drifts are elastic under the design base shear (before Cd/Ie or q); design drifts and limits are in the design drift table.'
+      : 'No seismic system is set: drifts are elastic under V = Sa(T)·W with R = 1 and no period cap, not design drifts.',
     `Verdict: the governing pass/fail rule of the criterion set for that story and case; overall ${verdictText(t.criterion.overall)}.`,
     ...criterionNotes(t.criterion),
   ]
@@ -564,7 +570,7 @@ export function buildResultTables(
   units: UnitSystem,
 ): ResultTable[] {
   const tables: (ResultTable | null)[] = [floorsTable(project, result, units), modesTable(result)]
-  tables.push(torsionTable(result, units))
+  tables.push(designBaseShearTable(result, units), torsionTable(result, units))
   const t = result.torsion
   if (t && t.criterion.rows.length > 0) {
     tables.push(
@@ -592,6 +598,7 @@ export function buildResultTables(
       ),
     )
   }
+  tables.push(...designDetailTables(result, units))
   tables.push(spectrumFloorsTable(result, units), spectrumBaseTable(result, units))
   tables.push(spectrumTorsionTable(result, units), wallForcesTable(result, units), elementForcesTable(result, units))
   tables.push(timeHistoryTable(result, units))

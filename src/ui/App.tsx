@@ -41,6 +41,7 @@ import { useAnalysis } from './hooks/useAnalysis'
 import { useAutosave } from './hooks/useAutosave'
 import { useEditor, useEditorPick } from './hooks/useEditor'
 import { ElementForcesPanel } from './ElementForcesPanel'
+import { SeismicSystemForm } from './SeismicSystemForm'
 import { Inspector } from './Inspector'
 import type { InspectedKind } from './Inspector'
 import { PlanCanvas } from './PlanCanvas'
@@ -527,6 +528,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial, auto
           <ErrorBoundary name="Element forces">
             <ElementForcesPanel floors={doc.floors} result={viewerResult} selection={selection} units={units} isStale={viewerStale} />
           </ErrorBoundary>
+          <ErrorBoundary name="Seismic system"><SeismicSystemForm store={store} result={viewerResult} units={units} /></ErrorBoundary>
           <ErrorBoundary name="Balance">
             <BalancePanel project={doc} onApply={onApplyBalance} />
           </ErrorBoundary>

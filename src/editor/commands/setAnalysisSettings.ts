@@ -1,3 +1,4 @@
+import { readSeismicDesign } from '@/model'
 import type { AnalysisSettings, Project, SpectrumSpec } from '@/model'
 import type { Patch } from './patch'
 import type { Check, CommandOutcome } from './result'
@@ -8,7 +9,14 @@ export interface SetAnalysisSettingsArgs {
   readonly patch: Patch<AnalysisSettings>
 }
 
-const OPTIONAL = ['criterionSets', 'baseShearTarget', 'groundMotion']
+const OPTIONAL = ['criterionSets', 'baseShearTarget', 'groundMotion', 'seismicDesign', 'torsionalFlexibilityLimit']
+
+/** The loader's own check of settings.seismicDesign: the first path-naming error, if any. */
+function checkSeismicDesign(v: unknown): Check {
+  const out = { errors: [] as string[], warnings: [] as string[] }
+  readSeismicDesign(v, 'settings.seismicDesign', out)
+  return out.errors[0]
+}
 const FIELDS = ['criterionSet', 'accidentalEccentricity', 'damping', 'spectrum', 'directionCombination', ...OPTIONAL]
 
 function checkSpectrum(s: SpectrumSpec): Check {
@@ -58,7 +66,9 @@ export function setAnalysisSettings(doc: Project, args: SetAnalysisSettingsArgs)
       ? undefined
       : `settings.directionCombination: must be "srss" or "100-30", got "${String(s.directionCombination)}"`) ??
     (s.baseShearTarget === undefined ? undefined : checkPositive('settings.baseShearTarget', s.baseShearTarget)) ??
-    checkSpectrum(s.spectrum)
+    checkSpectrum(s.spectrum) ??
+    (s.seismicDesign === undefined ? undefined : checkSeismicDesign(s.seismicDesign)) ??
+    (s.torsionalFlexibilityLimit === undefined ? undefined : checkPositive('settings.torsionalFlexibilityLimit', s.torsionalFlexibilityLimit))
   if (c) return refuse(c)
   return { ...doc, settings: s }
 }

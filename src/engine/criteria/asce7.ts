@@ -37,6 +37,7 @@ export const ASCE7_16: BuiltInCriterionSet = {
     'Ax uses total floor displacements at the extreme points, not story drifts (12.8.4.3).',
     'Rigid diaphragms are assumed; the Type 1 irregularities apply to rigid or semirigid ' +
       'diaphragms.',
-    'Consequences by seismic design category (12.3.3.1, 12.8.4.3, Table 12.6-1) are not evaluated.',
+    'Consequences by seismic design category (12.3.3.1, 12.8.4.3, Table 12.6-1) are listed as data ' +
+      'rows with the design-level numbers when settings.seismicDesign is given (from memory).',
   ],
 }
