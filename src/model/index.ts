@@ -22,6 +22,7 @@ export type {
   Slab,
   SpectrumSpec,
   Wall,
+  WallJoins,
   WallStoryOverride,
 } from './types'
 export type {
