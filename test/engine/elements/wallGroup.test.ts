@@ -234,6 +234,8 @@ describe('buildWallGroupElements', () => {
     expect(refs).toContain('a')
     expect(refs).toContain('b')
     expect(refs).not.toContain('a+b')
+    // the group's torsion chain (map [0, 0, 1]) is no plan line: the reason names the walls' one line
+    expect(r.issues.find((i) => i.code === 'mechanism')!.message).toContain('all elements lie on one line (parallel to x)')
   })
 })
 
