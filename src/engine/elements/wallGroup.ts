@@ -16,7 +16,8 @@ import type { Point, Project, Wall } from '@/model'
 import { elementMapRow, extendWithSupportFloor, segmentDirection } from '../dofs'
 import type { AssembledElement, Issue } from '../results'
 import { shearChainStiffness } from './frameLine'
-import { buildWallElement, wallStackStiffness } from './wall'
+import { positive } from './leftOut'
+import { wallStackStiffness } from './wall'
 import type { WallStory } from './wall'
 import { compositeSection, jointTolerance, legsJoin } from './wallSection'
 import type { CompositeSection, SectionLeg } from './wallSection'
@@ -112,6 +113,26 @@ export function findWallGroups(project: Pick<Project, 'walls' | 'floors'>): {
   return { groups, issues }
 }
 
+/**
+ * The input checks of `buildWallElement` without building the stack: length, floor range, material,
+ * story heights, thickness and factors at every story.
+ */
+function canBuildAlone(project: Pick<Project, 'floors' | 'materials'>, wall: Wall): boolean {
+  if (!segmentDirection(wall.p1, wall.p2)) return false
+  const range = elementFloorRange(project, wall)
+  const material = project.materials[wall.material]
+  if (!range || !material || !positive(material.E)) return false
+  if (!(Number.isFinite(material.nu) && material.nu > -1 && material.nu < 0.5 + 1e-12)) return false
+  for (let f = range.first; f <= range.last; f++) {
+    const floor = project.floors[f]
+    if (!floor || !positive(floor.height)) return false
+    const o = wall.stories?.[floor.id]
+    const values = [o?.thickness ?? wall.thickness, o?.flexureFactor ?? wall.flexureFactor, o?.shearFactor ?? wall.shearFactor]
+    if (!values.every(positive)) return false
+  }
+  return true
+}
+
 /** The section of a group at one story (per-story overrides of thickness and factors applied). */
 export function groupStoryLegs(walls: readonly Wall[], floorId: string): SectionLeg[] {
   return walls.map((w) => {
@@ -166,9 +187,7 @@ export function buildWallGroupElements(
 ): { elements: AssembledElement[] | null; issues: Issue[] } {
   const first = walls[0]
   if (!first) return { elements: [], issues: [] }
-  for (const w of walls) {
-    if (buildWallElement(project, w).element === null) return { elements: null, issues: [] }
-  }
+  for (const w of walls) if (!canBuildAlone(project, w)) return { elements: null, issues: [] }
   const range = elementFloorRange(project, first)
   const material = project.materials[first.material]
   if (!range || !material) return { elements: null, issues: [] }
@@ -178,9 +197,18 @@ export function buildWallGroupElements(
   const issues: Issue[] = []
 
   const sections: { h: number; s: CompositeSection; floorId: string }[] = []
+  // Stories with the same thickness and factors share one section (most stories of a core).
+  const seen = new Map<string, CompositeSection>()
   for (let f = range.first; f <= range.last; f++) {
     const floor = project.floors[f]!
-    sections.push({ h: floor.height, s: compositeSection(groupStoryLegs(walls, floor.id)), floorId: floor.id })
+    const legs = groupStoryLegs(walls, floor.id)
+    const key = legs.map((l) => `${l.t},${l.flexureFactor},${l.shearFactor}`).join(';')
+    let section = seen.get(key)
+    if (!section) {
+      section = compositeSection(legs)
+      seen.set(key, section)
+    }
+    sections.push({ h: floor.height, s: section, floorId: floor.id })
   }
   const ref = sections[0]!.s
   const { d1, d2, shearCentre: S } = ref
