@@ -239,14 +239,17 @@ export function computeElementForces(
     if (torsionDisplacements) addSpectrumCases(true)
   }
 
-  const out: ElementForceRow[] = elements.map((el, e) => ({
+  // A wall group's St Venant torsion chain carries a storey torque, not a shear along a plan line:
+  // it is left out of the rows (its map has no translation, so the storey shears still balance).
+  const out: ElementForceRow[] = elements.flatMap((el, e) => el.kind === 'wallGroupTorsion' ? [] : [{
     elementId: el.id,
+    ...(el.refs ? { refs: el.refs } : {}),
     kind: el.kind,
     direction: { x: el.map[0], y: el.map[1] },
     floorIds: elementStoryFloors(el).map((f) => structure.floors[f]!.id),
     shear: rows[e]!.shear,
     share: rows[e]!.share,
     overturningMoment: rows[e]!.moment,
-  }))
+  }])
   return { cases, elements: out, caution: CAUTION }
 }

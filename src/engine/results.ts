@@ -73,7 +73,7 @@ export interface FloorProps {
 /** One lateral element as assembled: its map rows and lateral stiffness over the floors it connects. */
 export interface AssembledElement {
   readonly id: string
-  readonly kind: 'wall' | 'frameLine' | 'columnX' | 'columnY'
+  readonly kind: 'wall' | 'frameLine' | 'columnX' | 'columnY' | 'wallGroup' | 'wallGroupTorsion'
   /** Floor indices (0-based) the element connects, bottom first; a floor it stands on comes first. */
   readonly floors: readonly number[]
   /** Row a = [d_x, d_y, x*d_y - y*d_x] (same for every floor). */
@@ -84,6 +84,8 @@ export interface AssembledElement {
   readonly stiffness: Float64Array
   /** True for shear-type (tridiagonal story) elements: frame lines and columns. */
   readonly isShearType: boolean
+  /** Model records the element stands for when its id is not one (the walls of a wall group). */
+  readonly refs?: readonly string[]
 }
 
 /** Assembled global matrices and floor data. */
@@ -375,6 +377,8 @@ export interface ElementForceCase {
 export interface ElementForceRow {
   /** Id of the model element (a column gives two rows, kinds 'columnX' and 'columnY'). */
   readonly elementId: string
+  /** For a wall group's principal stack: the ids of the walls that form the group. */
+  readonly refs?: readonly string[]
   readonly kind: AssembledElement['kind']
   /** Unit direction d of the element's line. */
   readonly direction: { readonly x: number; readonly y: number }

@@ -491,7 +491,9 @@ function describeMechanisms(
       const at = e.floors.indexOf(best)
       return at >= 0 && !(e.standsOnFloor && at === 0)
     })
-    const ids = [...new Set(supporting.map((e) => e.id))]
+    const ids = [...new Set(supporting.flatMap((e) => e.refs ?? [e.id]))]
+    // Elements acting along a plan line (a wall group's torsion chain, map [0, 0, 1], has none).
+    const lines = supporting.filter((e) => e.map[0] !== 0 || e.map[1] !== 0)
     const finding: Finding = {
       floor: best,
       directionKey: '',
@@ -512,10 +514,10 @@ function describeMechanisms(
       finding.freeWords = `to rotation about (${fmt(px)}, ${fmt(py)})`
       const size = Math.max(len[best]!, 1)
       if (
-        supporting.length > 0 &&
+        lines.length > 0 &&
         Number.isFinite(px) &&
         Number.isFinite(py) &&
-        supporting.every((e) => Math.abs(e.map[2] - (px * e.map[1] - py * e.map[0])) <= 0.05 * size)
+        lines.every((e) => Math.abs(e.map[2] - (px * e.map[1] - py * e.map[0])) <= 0.05 * size)
       ) {
         finding.reasonKey = 'concurrent'
         finding.reasonWords = 'all element lines meet near one point'
@@ -524,14 +526,14 @@ function describeMechanisms(
     if (supporting.length === 0) {
       finding.reasonKey = 'nothing-below'
       finding.reasonWords = 'it has no lateral element below it'
-    } else if (finding.reasonKey === 'other') {
-      const d0 = supporting[0]!.map
-      const parallel = supporting.every((e) => Math.abs(e.map[0] * d0[1] - e.map[1] * d0[0]) < 1e-6)
+    } else if (finding.reasonKey === 'other' && lines.length > 0) {
+      const d0 = lines[0]!.map
+      const parallel = lines.every((e) => Math.abs(e.map[0] * d0[1] - e.map[1] * d0[0]) < 1e-6)
       if (parallel) {
         const sgn = (e: { map: readonly [number, number, number] }): number =>
           e.map[0] * d0[0] + e.map[1] * d0[1] >= 0 ? 1 : -1
         const size = Math.max(len[best]!, 1)
-        const collinear = supporting.every((e) => Math.abs(sgn(e) * e.map[2] - d0[2]) <= 1e-6 * size)
+        const collinear = lines.every((e) => Math.abs(sgn(e) * e.map[2] - d0[2]) <= 1e-6 * size)
         const dir = directionWords(d0[0], d0[1])
         finding.reasonKey = collinear ? 'collinear' : 'parallel'
         finding.reasonWords = collinear

@@ -24,6 +24,7 @@ export type {
   SpectrumModeRule,
   SpectrumSpec,
   Wall,
+  WallJoins,
   WallStoryOverride,
 } from './types'
 export type {

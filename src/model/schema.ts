@@ -703,6 +703,7 @@ function readWall(ctx: Ctx, p: string, id: string, o: Record<string, unknown>, r
     ...factorRule,
     fallback: STIFFNESS_FACTOR_DEFAULTS.wallShear,
   })
+  const joins = o.joins === undefined ? undefined : oneOf(ctx, key(p, 'joins'), o.joins, ['auto', 'apart'] as const, 'auto')
   const range = floorRange(ctx, p, o, refs)
   const stories = storyKeys(ctx, key(p, 'stories'), o.stories, refs, range, (sp, sv) => {
     const so = object(ctx, sp, sv, ['thickness', 'flexureFactor', 'shearFactor'])
@@ -738,6 +739,7 @@ function readWall(ctx: Ctx, p: string, id: string, o: Record<string, unknown>, r
     base: range!.base,
     top: range!.top,
     ...(stories !== undefined ? { stories } : {}),
+    ...(joins !== undefined ? { joins } : {}),
   }
 }
 
@@ -1259,6 +1261,7 @@ function validate(ctx: Ctx, doc: RawDocument): Project | undefined {
     'base',
     'top',
     'stories',
+    'joins',
   ])
   const frameLines = records(ctx, 'frameLines', doc.frameLines, (p, id, o) => readFrameLine(ctx, p, id, o, refs), [
     'name',

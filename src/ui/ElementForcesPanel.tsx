@@ -21,6 +21,8 @@ const ROW_LABEL: Record<ElementForceRow['kind'], string> = {
   frameLine: 'along the frame',
   columnX: 'along local x',
   columnY: 'along local y',
+  wallGroup: 'along a principal axis of its group',
+  wallGroupTorsion: 'torsion of its group (N·m)',
 }
 
 const BAR_HEIGHT = 12
@@ -68,7 +70,7 @@ export function ElementForcesPanel({ floors, result, selection, units, isStale }
   const ef = result?.elementForces ?? null
   if (!ef || selection.length !== 1) return null
   const id = selection[0]
-  const rows = ef.elements.filter((r) => r.elementId === id)
+  const rows = ef.elements.filter((r) => r.elementId === id || (id !== undefined && r.refs?.includes(id) === true))
   if (rows.length === 0 || ef.cases.length === 0) return null
   const found = ef.cases.findIndex((c) => c.id === caseId)
   const ci = found >= 0 ? found : 0

@@ -139,6 +139,28 @@ describe('plan editor on the demo building', () => {
     expect(errors).toEqual([])
   })
 
+  it('shows the core as one wall group and lets a wall be kept apart, undone in one step', async () => {
+    const { page, errors } = await demoPage()
+    const core = 'shear-centre-core-e+core-n+core-s+core-w'
+    await expect(page.locator(`[data-testid="${core}"]`).count()).resolves.toBe(1)
+    const before = await markerAt(page, 'cr')
+    await page.getByTestId('action-tool-pick').click()
+    await clickPlan(page, { x: 8, y: 20.5 }) // the core's east wall
+    await expect(page.getByTestId('wall-group').textContent()).resolves.toContain('Acts with: Core north, Core south, Core west')
+    await page.getByTestId('field-joins').selectOption('apart')
+    await waitForCurrentAnalysis(page)
+    await expect(page.getByTestId('wall-group').textContent()).resolves.toContain('Acts alone')
+    await expect(page.locator('[data-testid="shear-centre-core-n+core-s+core-w"]').count()).resolves.toBe(1)
+    // the rest of the core is a plain C now: its stiffness and so the centre of rigidity change (statics)
+    expect(distance(await markerAt(page, 'cr'), before)).toBeGreaterThan(0.01)
+    await page.keyboard.press('Escape')
+    await page.keyboard.press('Control+z')
+    await waitForCurrentAnalysis(page)
+    await expect(page.locator(`[data-testid="${core}"]`).count()).resolves.toBe(1)
+    expect(distance(await markerAt(page, 'cr'), before)).toBeLessThan(1e-9)
+    expect(errors).toEqual([])
+  })
+
   it('restores the autosaved model after a reload', async () => {
     const { page, context, errors } = await session.newPage()
     await openApp(page, session.url)
