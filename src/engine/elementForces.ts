@@ -239,9 +239,9 @@ export function computeElementForces(
     if (torsionDisplacements) addSpectrumCases(true)
   }
 
-  // A wall group's St Venant torsion chain carries a storey torque, not a shear along a plan line:
-  // it is left out of the rows (its map has no translation, so the storey shears still balance).
-  const out: ElementForceRow[] = elements.flatMap((el, e) => el.kind === 'wallGroupTorsion' ? [] : [{
+  // Rows stay aligned with structure.elements. A wall group's St Venant torsion chain (kind
+  // 'wallGroupTorsion') carries a storey torque in N·m in its `shear` entries, not a force.
+  const out: ElementForceRow[] = elements.map((el, e) => ({
     elementId: el.id,
     ...(el.refs ? { refs: el.refs } : {}),
     kind: el.kind,
@@ -250,6 +250,6 @@ export function computeElementForces(
     shear: rows[e]!.shear,
     share: rows[e]!.share,
     overturningMoment: rows[e]!.moment,
-  }])
+  }))
   return { cases, elements: out, caution: CAUTION }
 }

@@ -494,7 +494,7 @@ function elementForcesTable(result: AnalysisResult, units: UnitSystem): ResultTa
   ]
   const rows: TableCell[][] = []
   ef.cases.forEach((c, ci) => {
-    for (const e of ef.elements) {
+    for (const e of ef.elements.filter((row) => row.kind !== 'wallGroupTorsion')) {
       for (let k = e.floorIds.length - 1; k >= 0; k--) {
         const floor = names.get(e.floorIds[k]!)
         rows.push([

@@ -70,7 +70,9 @@ export function ElementForcesPanel({ floors, result, selection, units, isStale }
   const ef = result?.elementForces ?? null
   if (!ef || selection.length !== 1) return null
   const id = selection[0]
-  const rows = ef.elements.filter((r) => r.elementId === id || (id !== undefined && r.refs?.includes(id) === true))
+  const rows = ef.elements.filter(
+    (r) => r.kind !== 'wallGroupTorsion' && (r.elementId === id || (id !== undefined && r.refs?.includes(id) === true)),
+  )
   if (rows.length === 0 || ef.cases.length === 0) return null
   const found = ef.cases.findIndex((c) => c.id === caseId)
   const ci = found >= 0 ? found : 0

@@ -167,7 +167,7 @@ describe('element storey shears', () => {
     const detail = runSpectrumDetailed(s, modes, p.settings, { solver: solver.solver, torsion })
     const ef = computeElementForces(s, torsion, detail)
     const ci = ef.cases.findIndex((c) => c.id === 'spectrum-x')
-    const e = s.elements.findIndex((el) => el.id === 'w1')
+    const e = s.elements.findIndex((el) => el.id === 'w3')
     const el = s.elements[e]!
     const n = s.dofCount
     const count = detail.set.count

@@ -14,14 +14,14 @@ describe('ElementForcesPanel', () => {
 
   it('shows the selected wall storey by storey with the caution when one wall is selected', () => {
     const html = renderToString(
-      <ElementForcesPanel floors={project.floors} result={result} selection={['core-s']} units="SI" isStale={false} />,
+      <ElementForcesPanel floors={project.floors} result={result} selection={['gable-e']} units="SI" isStale={false} />,
     )
     expect(html).toContain('data-testid="element-forces"')
     expect(html).toContain(CAUTION_SHORT)
     expect(html).toContain(CAUTION)
     expect(html).toContain('element-forces-table-wall')
     // one table row per storey the wall occupies, and every case in the picker
-    const row = result.elementForces!.elements.find((e) => e.elementId === 'core-s')!
+    const row = result.elementForces!.elements.find((e) => e.elementId === 'gable-e')!
     expect((html.match(/<tr>/g) ?? []).length).toBe(row.floorIds.length + 1)
     for (const c of result.elementForces!.cases) expect(html).toContain(c.label)
     expect(html).toContain('kN·m')
