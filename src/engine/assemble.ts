@@ -9,6 +9,7 @@ import { DOFS_PER_FLOOR } from './dofs'
 import { buildColumnElements } from './elements/column'
 import { buildFrameLineElement } from './elements/frameLine'
 import { buildWallElement } from './elements/wall'
+import { buildWallGroupElements, findWallGroups } from './elements/wallGroup'
 import { computeFloorMass, floorMassBlock } from './mass'
 import type { AssembledElement, FloorProps, Issue, Structure } from './results'
 
@@ -104,7 +105,20 @@ export function buildStructure(project: Project): {
   if (!heightsOk || !massOk) return { structure: null, floors, issues }
 
   const elements: AssembledElement[] = []
+  // Joined walls act as one composite section (docs/mechanics.md §Wall groups).
+  const grouping = findWallGroups(project)
+  issues.push(...grouping.issues)
+  const grouped = new Set<string>()
+  for (const group of grouping.groups) {
+    const members = group.wallIds.map((id) => project.walls[id]!)
+    const r = buildWallGroupElements(project, members, group.id)
+    issues.push(...r.issues)
+    if (!r.elements) continue
+    elements.push(...r.elements)
+    for (const id of group.wallIds) grouped.add(id)
+  }
   for (const wall of Object.values(project.walls)) {
+    if (grouped.has(wall.id)) continue
     const r = buildWallElement(project, wall)
     issues.push(...r.issues)
     if (r.element) elements.push(r.element)
@@ -132,7 +146,7 @@ export function buildStructure(project: Project): {
         code: 'invalid-model',
         severity: 'warning',
         message: `[engine] element ${element.id}: its stiffness is not finite; it is left out of the analysis`,
-        refs: [element.id],
+        refs: element.refs ?? [element.id],
       })
       continue
     }

@@ -14,6 +14,7 @@ import type { FrameLine, FrameStiffness, Point, Project, Wall } from '@/model'
 import { analyzeProject } from './analyze'
 import { buildStructure } from './assemble'
 import { computeCentres } from './centres'
+import { findWallGroups } from './elements/wallGroup'
 import type { FloorCentres } from './results'
 import { createStiffnessSolver } from './solve'
 
@@ -375,9 +376,14 @@ export function suggestBalance(project: Project, options: BalanceOptions = {}): 
     ...Object.values(project.walls).map((record): Lateral => ({ kind: 'wall', record })),
     ...Object.values(project.frameLines).map((record): Lateral => ({ kind: 'frameLine', record })),
   ]
+  // A wall of a wall group (a core) is only thickened or thinned: moving or lengthening one leg would
+  // tear it off its core (docs/mechanics.md §3a, docs/balance.md).
+  const grouped = new Set(findWallGroups(project).groups.flatMap((g) => g.wallIds))
   const found: BalanceSuggestion[] = []
   for (const el of laterals) {
+    const inGroup = el.kind === 'wall' && grouped.has(el.record.id)
     for (const trial of trialsFor(el, box, step, options.maxMoveFraction ?? 0.25)) {
+      if (inGroup && trial.action !== 'thickness') continue
       const cost = (p: number): number => {
         const record = trial.apply(p)
         if (!record) return Infinity

@@ -1,6 +1,7 @@
 /**
  * engine: pure numerics, model in, results out. Runs in node (CLI, tests) and in a Web Worker.
- * Public API: analyzeProject, suggestBalance (the balance assistant) and the result types.
+ * Public API: analyzeProject, suggestBalance (the balance assistant), the wall groups of a project
+ * (findWallGroups, describeWallGroups) and the result types.
  * Must not import: react, three, zustand, editor, viewer, ui, window/document.
  */
 export { analyzeProject } from './analyze'
@@ -8,6 +9,9 @@ export { balanceScore, suggestBalance } from './balance'
 export { BUILT_IN_CRITERION_SETS } from './criteria'
 export type { BuiltInCriterionSet } from './criteria'
 export { GRAVITY, spectralAcceleration } from './spectra'
+export { describeWallGroups, findWallGroups } from './elements/wallGroup'
+export type { WallGroup, WallGroupSummary } from './elements/wallGroup'
+export type { CompositeSection } from './elements/wallSection'
 export type { BalanceAction, BalanceOptions, BalanceResult, BalanceSuggestion } from './balance'
 export type {
   AnalysisOptions,

@@ -70,7 +70,7 @@ export interface FloorProps {
 /** One lateral element as assembled: its map rows and lateral stiffness over the floors it connects. */
 export interface AssembledElement {
   readonly id: string
-  readonly kind: 'wall' | 'frameLine' | 'columnX' | 'columnY'
+  readonly kind: 'wall' | 'frameLine' | 'columnX' | 'columnY' | 'wallGroup' | 'wallGroupTorsion'
   /** Floor indices (0-based) the element connects, bottom first; a floor it stands on comes first. */
   readonly floors: readonly number[]
   /** Row a = [d_x, d_y, x*d_y - y*d_x] (same for every floor). */
@@ -81,6 +81,8 @@ export interface AssembledElement {
   readonly stiffness: Float64Array
   /** True for shear-type (tridiagonal story) elements: frame lines and columns. */
   readonly isShearType: boolean
+  /** Model records the element stands for when its id is not one (the walls of a wall group). */
+  readonly refs?: readonly string[]
 }
 
 /** Assembled global matrices and floor data. */

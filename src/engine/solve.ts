@@ -491,7 +491,7 @@ function describeMechanisms(
       const at = e.floors.indexOf(best)
       return at >= 0 && !(e.standsOnFloor && at === 0)
     })
-    const ids = [...new Set(supporting.map((e) => e.id))]
+    const ids = [...new Set(supporting.flatMap((e) => e.refs ?? [e.id]))]
     const finding: Finding = {
       floor: best,
       directionKey: '',

@@ -23,6 +23,7 @@ export type {
   SpectrumModeRule,
   SpectrumSpec,
   Wall,
+  WallJoins,
   WallStoryOverride,
 } from './types'
 export type {

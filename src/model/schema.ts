@@ -693,6 +693,7 @@ function readWall(ctx: Ctx, p: string, id: string, o: Record<string, unknown>, r
   const material = materialRef(ctx, key(p, 'material'), o.material, refs)
   const flexureFactor = num(ctx, key(p, 'flexureFactor'), o.flexureFactor, { ...factorRule, fallback: 1 })
   const shearFactor = num(ctx, key(p, 'shearFactor'), o.shearFactor, { ...factorRule, fallback: 1 })
+  const joins = o.joins === undefined ? undefined : oneOf(ctx, key(p, 'joins'), o.joins, ['auto', 'apart'] as const, 'auto')
   const range = floorRange(ctx, p, o, refs)
   const stories = storyKeys(ctx, key(p, 'stories'), o.stories, refs, range, (sp, sv) => {
     const so = object(ctx, sp, sv, ['thickness', 'flexureFactor', 'shearFactor'])
@@ -728,6 +729,7 @@ function readWall(ctx: Ctx, p: string, id: string, o: Record<string, unknown>, r
     base: range!.base,
     top: range!.top,
     ...(stories !== undefined ? { stories } : {}),
+    ...(joins !== undefined ? { joins } : {}),
   }
 }
 
@@ -1199,6 +1201,7 @@ function validate(ctx: Ctx, doc: RawDocument): Project | undefined {
     'base',
     'top',
     'stories',
+    'joins',
   ])
   const frameLines = records(ctx, 'frameLines', doc.frameLines, (p, id, o) => readFrameLine(ctx, p, id, o, refs), [
     'name',

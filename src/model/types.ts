@@ -108,7 +108,16 @@ export interface Wall {
   readonly base: BaseRef
   readonly top: FloorId
   readonly stories?: Readonly<Record<string, WallStoryOverride>>
+  /**
+   * Whether the wall joins walls it touches into one composite section (a wall group, e.g. an L, C or
+   * box core): 'auto' (default) joins it, 'apart' keeps it a planar wall of its own.
+   * @see ../../docs/mechanics.md §Wall groups
+   */
+  readonly joins?: WallJoins
 }
+
+/** How a wall combines with walls it touches (see `Wall.joins`). */
+export type WallJoins = 'auto' | 'apart'
 
 /** How a frame line's story stiffness is obtained. */
 export type FrameStiffness =

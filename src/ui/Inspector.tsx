@@ -20,6 +20,7 @@ import type {
   UnitSystem,
   Wall,
 } from '@/model'
+import { findWallGroups } from '@/engine'
 import { NumberField } from './NumberField'
 import { formatQuantity } from './quantities'
 
@@ -174,6 +175,36 @@ function Single(props: Props & { id: string; kind: InspectedKind }) {
       num('flexureFactor', 'Flexure factor f_I', w.flexureFactor, 'ratio', (v) => replace({ ...w, flexureFactor: v }), POSITIVE)
       num('shearFactor', 'Shear factor f_A', w.shearFactor, 'ratio', (v) => replace({ ...w, shearFactor: v }), POSITIVE)
       range(w, (base, top) => replace({ ...w, base, top }))
+      fields.push(
+        <SelectField
+          key={`${id}-joins`}
+          label="Touching walls"
+          value={w.joins ?? 'auto'}
+          testId="field-joins"
+          options={[
+            { value: 'auto', label: 'join into one section' },
+            { value: 'apart', label: 'keep this wall apart' },
+          ]}
+          onCommit={(v) => {
+            if (v === 'apart') return replace({ ...w, joins: 'apart' })
+            const { joins: _joins, ...auto } = w
+            return replace(auto)
+          }}
+        />,
+      )
+      {
+        const group = findWallGroups(project).groups.find((g) => g.wallIds.includes(w.id))
+        const others = group ? group.wallIds.filter((o) => o !== w.id).map((o) => project.walls[o]?.name || o) : []
+        fields.push(
+          <p key={`${id}-group`} className="muted small" data-testid="wall-group">
+            {others.length > 0
+              ? `Acts with: ${others.join(', ')} (one section)`
+              : w.joins === 'apart'
+                ? 'Acts alone (kept apart from touching walls).'
+                : 'Acts alone (touches no wall of the same floors and material).'}
+          </p>,
+        )
+      }
       break
     }
     case 'frameLines': {

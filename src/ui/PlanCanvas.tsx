@@ -4,8 +4,9 @@
  * live centre overlays. Pointer input is turned into plan coordinates (m) and handed to `onPointer`;
  * pan (middle/right button or Space + drag) and zoom (wheel) are handled here.
  */
-import { useCallback, useEffect, useLayoutEffect, useRef, useState } from 'react'
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react'
 import type { PointerEvent as ReactPointerEvent, ReactNode, WheelEvent as ReactWheelEvent } from 'react'
+import { describeWallGroups } from '@/engine'
 import { CAUTION_SHORT } from '@/model'
 import type { Point, Project, UnitSystem } from '@/model'
 import type { FloorOverlay } from './floorOverlay'
@@ -78,6 +79,7 @@ export function PlanCanvas(props: Props) {
   const hostRef = useRef<HTMLDivElement>(null)
   const svgRef = useRef<SVGSVGElement>(null)
   const [size, setSize] = useState<ScreenSize>({ width: 800, height: 600 })
+  const groups = useMemo(() => describeWallGroups(project), [project])
   const [view, setView] = useState<PlanView>(() => fitView(bounds, { width: 800, height: 600 }))
   const [hover, setHover] = useState<Point | null>(null)
   const panning = useRef<{ x: number; y: number } | null>(null)
@@ -319,6 +321,25 @@ export function PlanCanvas(props: Props) {
       <g key={w.id} data-id={w.id} data-kind="wall" data-testid={`el-${w.id}`} className={`wall${selected ? ' selected' : ''}`}>
         <line className="hit" x1={a.x} y1={a.y} x2={b.x} y2={b.y} />
         <path className="wall-body" d={polygonPath(outline)} />
+      </g>,
+    )
+  }
+
+  // Wall groups on this floor: their shear centre with the section's principal directions.
+  const onPlan = new Set<string>(scene.walls.map((w) => w.id))
+  for (const g of groups) {
+    if (!g.wallIds.every((wid) => onPlan.has(wid))) continue
+    const sc = g.section.shearCentre
+    if (!Number.isFinite(sc.x) || !Number.isFinite(sc.y)) continue
+    const s = S(sc)
+    const arm = (d: Point): string => `M${s.x - 12 * d.x} ${s.y + 12 * d.y} L${s.x + 12 * d.x} ${s.y - 12 * d.y}`
+    const names = g.wallIds.map((wid) => project.walls[wid]?.name || wid).join(', ')
+    layers.push(
+      <g key={`sc-${g.id}`} className="group-shear-centre" data-testid={`shear-centre-${g.id}`} data-x={sc.x} data-y={sc.y}>
+        <title>{`Shear centre of ${names} (one section)`}</title>
+        <path d={`${arm(g.section.d1)} ${arm(g.section.d2)}`} />
+        <circle r={5} cx={s.x} cy={s.y} />
+        <text x={s.x + 8} y={s.y + 16}>SC</text>
       </g>,
     )
   }

@@ -78,6 +78,12 @@ describe('suggestBalance', () => {
     for (const s of demo.suggestions) expect(s.scoreAfter).toBeLessThan(demo.score)
   })
 
+  it('only thickens or thins the walls of the demo core (one wall group), never moves a leg off it', () => {
+    const demo = suggestBalance(demoProject(), { withDriftRatios: false })
+    const coreMoves = demo.suggestions.filter((s) => s.elementId.startsWith('core-') && s.action !== 'thickness')
+    expect(coreMoves).toEqual([])
+  })
+
   it('says why when the model is a mechanism', () => {
     const p = eccentricOneStorey()
     const { yw0: _a, yw20: _b, ...onlyX } = p.frameLines

@@ -115,9 +115,10 @@ describe('solveModes on a slender cantilever wall', () => {
       const b = projectBuilder({ floors: N, height: H / N })
         .material({ id: 'c', E, nu: 0.2 })
         .rectSlab({ x: -a / 2, y: -a / 2, width: a, depth: a, areaMass })
-      // two Y walls and two (thinner-looking, stiffer) X walls; huge shear factor: Phi -> 0
-      for (const x of [-3, 3]) b.wall({ p1: { x, y: -Lw / 2 }, p2: { x, y: Lw / 2 }, thickness: t, material: 'c', shearFactor: 1e6 })
-      for (const y of [-3, 3]) b.wall({ p1: { x: -Lw / 2 * 1.2, y }, p2: { x: (Lw / 2) * 1.2, y }, thickness: t, material: 'c', shearFactor: 1e6 })
+      // two Y walls and two (thinner-looking, stiffer) X walls; huge shear factor: Phi -> 0. The Y
+      // walls' ends lie on the X walls: kept apart so that each acts as its own planar cantilever.
+      for (const x of [-3, 3]) b.wall({ p1: { x, y: -Lw / 2 }, p2: { x, y: Lw / 2 }, thickness: t, material: 'c', shearFactor: 1e6, joins: 'apart' })
+      for (const y of [-3, 3]) b.wall({ p1: { x: -Lw / 2 * 1.2, y }, p2: { x: (Lw / 2) * 1.2, y }, thickness: t, material: 'c', shearFactor: 1e6, joins: 'apart' })
       const s = buildStructure(b.build()).structure!
       const w = yOmegas(solveModes(s, { method: 'all' }))
       const EI = 2 * (E * t * Lw ** 3) / 12

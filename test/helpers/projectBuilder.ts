@@ -88,6 +88,7 @@ export interface ProjectBuilder {
     stories?: Record<string, WallStoryOverride>
     id?: string
     name?: string
+    joins?: 'auto' | 'apart'
   }): ProjectBuilder
   /** A frame line; give `storyStiffness` (direct, N/m) or a full `stiffness` description. */
   frameLine(opts: {
@@ -223,6 +224,7 @@ export function projectBuilder(options: ProjectBuilderOptions = {}): ProjectBuil
         base: o.base ?? 'ground',
         top: o.top ?? topId(),
         ...(o.stories !== undefined ? { stories: o.stories } : {}),
+        ...(o.joins !== undefined ? { joins: o.joins } : {}),
       } as Wall
       return builder
     },

@@ -53,6 +53,17 @@ describe('parseProject', () => {
     expect(project.floors.reduce((s, f) => s + f.height, 0)).toBeCloseTo(23.7, 12)
   })
 
+  it('reads the optional wall field joins and names its path when the value is wrong', () => {
+    const doc = copy(corner)
+    setPath(doc, 'walls.core-e.joins', 'apart')
+    const { project } = projectOf(doc)
+    expect(project.walls['core-e']?.joins).toBe('apart')
+    expect(project.walls['core-s']).not.toHaveProperty('joins') // default auto: not written
+    expect(serializeProject(project)).toContain('"joins": "apart"')
+    setPath(doc, 'walls.core-e.joins', 'yes')
+    expect(errorsOf(doc)).toEqual(['walls.core-e.joins: must be one of "auto", "apart", got "yes"'])
+  })
+
   it('names the path and the value when a number is out of range or not a number', () => {
     const doc = copy(corner)
     setPath(doc, 'walls.core-s.thickness', -0.2)

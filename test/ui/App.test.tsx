@@ -71,4 +71,19 @@ describe('App', () => {
     expect(us).toMatch(/data-testid="field-thickness" value="9.8"/)
     expect(us).toMatch(/data-testid="field-p1x" value="98.43"/)
   })
+
+  it('draws the shear centre of the demo core (one wall group) on the plan', () => {
+    const html = render()
+    expect(html).toContain('data-testid="shear-centre-core-e+core-n+core-s+core-w"')
+  })
+
+  it('tells which walls a selected wall acts with, and offers to keep it apart', () => {
+    const project = demoProject()
+    const props = { project, onReplace: () => null, onDelete: () => undefined, onCopyToFloors: () => null, copyMessage: null, units: 'SI' as const }
+    const core = renderToString(<Inspector {...props} selection={['core-s']} />)
+    expect(core).toContain('Acts with: Core east (lift door side), Core north, Core west (one section)')
+    expect(core).toContain('data-testid="field-joins"')
+    const gable = renderToString(<Inspector {...props} selection={['gable-e']} />)
+    expect(gable).toContain('Acts alone')
+  })
 })

@@ -18,7 +18,7 @@ import {
 
 /** Fields each record kind may have (anything else in a patch is refused). */
 export const RECORD_FIELDS: Readonly<Record<RecordKind, readonly string[]>> = {
-  walls: ['name', 'p1', 'p2', 'thickness', 'material', 'flexureFactor', 'shearFactor', 'base', 'top', 'stories'],
+  walls: ['name', 'p1', 'p2', 'thickness', 'material', 'flexureFactor', 'shearFactor', 'base', 'top', 'stories', 'joins'],
   frameLines: ['name', 'p1', 'p2', 'stiffness', 'base', 'top'],
   columns: ['name', 'at', 'angle', 'Ix', 'Iy', 'material', 'fixity', 'stiffnessFactor', 'base', 'top'],
   slabs: ['floor', 'outline', 'openings', 'areaMass'],
@@ -28,7 +28,7 @@ export const RECORD_FIELDS: Readonly<Record<RecordKind, readonly string[]>> = {
 }
 
 /** Fields that may be cleared by patching them to undefined. */
-export const OPTIONAL_FIELDS: readonly string[] = ['stories', 'stiffnessFactor', 'polarInertia']
+export const OPTIONAL_FIELDS: readonly string[] = ['stories', 'stiffnessFactor', 'polarInertia', 'joins']
 
 /** Readable singular name of a kind, for messages. */
 export const KIND_LABEL: Readonly<Record<RecordKind, string>> = {
@@ -84,7 +84,10 @@ function checkWall(doc: Project, w: Wall): Check {
     checkMaterial(doc, 'material', w.material) ??
     checkPositive('flexureFactor', w.flexureFactor) ??
     checkPositive('shearFactor', w.shearFactor) ??
-    checkRange(doc, w.base, w.top)
+    checkRange(doc, w.base, w.top) ??
+    (w.joins === undefined || w.joins === 'auto' || w.joins === 'apart'
+      ? undefined
+      : `joins: must be "auto" or "apart", got "${String(w.joins)}"`)
   if (c) return c
   for (const [k, o] of Object.entries(w.stories ?? {})) {
     const f = `stories.${k}`

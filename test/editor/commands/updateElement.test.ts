@@ -21,6 +21,17 @@ describe('updateElement', () => {
     })
   })
 
+  it('keeps a wall apart from touching walls and lets it join again', () => {
+    const store = createTestEditor()
+    checkDoUndoRedo(store, 'updateElement', { id: 'w1', patch: { joins: 'apart' } }, (doc) => {
+      expect(doc.walls.w1?.joins).toBe('apart')
+    })
+    checkDoUndoRedo(store, 'updateElement', { id: 'w1', patch: { joins: undefined } }, (doc) => {
+      expect(doc.walls.w1).not.toHaveProperty('joins')
+    })
+    checkRefused(store, 'updateElement', { id: 'w1', patch: { joins: 'never' as never } }, 'wall w1: joins: must be "auto" or "apart"')
+  })
+
   it('patches columns, slabs and masses', () => {
     const store = createTestEditor()
     checkDoUndoRedo(store, 'updateElement', { id: 'c1', patch: { fixity: 'pinned', angle: 0.5 } }, (doc) => {
