@@ -425,7 +425,14 @@ function designCaseIndex(result: AnalysisResult): number {
   return -1
 }
 
-const KIND_WORDS = { wall: 'wall', frameLine: 'frame line', columnX: 'column local x', columnY: 'column local y' } as const
+const KIND_WORDS = {
+  wall: 'wall',
+  frameLine: 'frame line',
+  columnX: 'column local x',
+  columnY: 'column local y',
+  wallGroup: 'wall group, principal axis',
+  wallGroupTorsion: 'wall group, St Venant torsion',
+} as const
 
 function wallForcesTable(result: AnalysisResult, units: UnitSystem): ResultTable | null {
   const ef = result.elementForces

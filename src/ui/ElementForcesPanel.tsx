@@ -21,6 +21,8 @@ const ROW_LABEL: Record<ElementForceRow['kind'], string> = {
   frameLine: 'along the frame',
   columnX: 'along local x',
   columnY: 'along local y',
+  wallGroup: 'along a principal axis of its group',
+  wallGroupTorsion: 'torsion of its group (N·m)',
 }
 
 const BAR_HEIGHT = 12
