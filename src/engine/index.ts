@@ -5,14 +5,33 @@
  * Must not import: react, three, zustand, editor, viewer, ui, window/document.
  */
 export { analyzeProject } from './analyze'
-export { balanceScore, suggestBalance } from './balance'
+export {
+  BALANCE_DEFAULTS,
+  balanceMetrics,
+  balanceScore,
+  elementOnSlabs,
+  objectiveValue,
+  suggestBalance,
+  suggestionApplies,
+  worsenedMeasures,
+} from './balance'
 export { BUILT_IN_CRITERION_SETS } from './criteria'
 export type { BuiltInCriterionSet } from './criteria'
 export { GRAVITY, spectralAcceleration } from './spectra'
 export { describeWallGroups, findWallGroups } from './elements/wallGroup'
 export type { WallGroup, WallGroupSummary } from './elements/wallGroup'
 export type { CompositeSection } from './elements/wallSection'
-export type { BalanceAction, BalanceOptions, BalanceResult, BalanceSuggestion } from './balance'
+export type {
+  BalanceAction,
+  BalanceEdit,
+  BalanceMetrics,
+  BalanceObjective,
+  BalanceOptions,
+  BalanceProgress,
+  BalanceResult,
+  BalanceStep,
+  BalanceSuggestion,
+} from './balance'
 export type {
   AnalysisOptions,
   AnalysisResult,

@@ -694,6 +694,7 @@ function readWall(ctx: Ctx, p: string, id: string, o: Record<string, unknown>, r
   const flexureFactor = num(ctx, key(p, 'flexureFactor'), o.flexureFactor, { ...factorRule, fallback: 1 })
   const shearFactor = num(ctx, key(p, 'shearFactor'), o.shearFactor, { ...factorRule, fallback: 1 })
   const joins = o.joins === undefined ? undefined : oneOf(ctx, key(p, 'joins'), o.joins, ['auto', 'apart'] as const, 'auto')
+  const locked = lockFlag(ctx, key(p, 'locked'), o.locked)
   const range = floorRange(ctx, p, o, refs)
   const stories = storyKeys(ctx, key(p, 'stories'), o.stories, refs, range, (sp, sv) => {
     const so = object(ctx, sp, sv, ['thickness', 'flexureFactor', 'shearFactor'])
@@ -730,7 +731,15 @@ function readWall(ctx: Ctx, p: string, id: string, o: Record<string, unknown>, r
     top: range!.top,
     ...(stories !== undefined ? { stories } : {}),
     ...(joins !== undefined ? { joins } : {}),
+    ...(locked ? { locked } : {}),
   }
+}
+
+/** Optional `locked` flag of walls and frame lines (absent = false). */
+function lockFlag(ctx: Ctx, path: string, v: unknown): true | undefined {
+  if (v === undefined || v === false) return undefined
+  if (v === true) return true
+  return fail(ctx, path, `must be true or false, got ${show(v)}`)
 }
 
 function readFrameStiffness(
@@ -817,6 +826,7 @@ function readFrameLine(
   const p2 = point(ctx, key(p, 'p2'), o.p2)
   const range = floorRange(ctx, p, o, refs)
   const stiffness = readFrameStiffness(ctx, key(p, 'stiffness'), o.stiffness, refs, range)
+  const locked = lockFlag(ctx, key(p, 'locked'), o.locked)
   if (ctx.errors.length > before || !range || !stiffness) return undefined
   if (p1 && p2 && p1.x === p2.x && p1.y === p2.y) {
     warn(ctx, p, 'p1 and p2 coincide: a frame line needs a direction')
@@ -829,6 +839,7 @@ function readFrameLine(
     stiffness,
     base: range.base,
     top: range.top,
+    ...(locked ? { locked } : {}),
   }
 }
 
@@ -1202,6 +1213,7 @@ function validate(ctx: Ctx, doc: RawDocument): Project | undefined {
     'top',
     'stories',
     'joins',
+    'locked',
   ])
   const frameLines = records(ctx, 'frameLines', doc.frameLines, (p, id, o) => readFrameLine(ctx, p, id, o, refs), [
     'name',
@@ -1210,6 +1222,7 @@ function validate(ctx: Ctx, doc: RawDocument): Project | undefined {
     'stiffness',
     'base',
     'top',
+    'locked',
   ])
   const columns = records(ctx, 'columns', doc.columns, (p, id, o) => readColumn(ctx, p, id, o, refs), [
     'name',
