@@ -48,6 +48,8 @@ export interface BalancePanelViewProps {
   readonly fault?: string | null
   /** True when the search passed its grace period without an answer. */
   readonly slow?: boolean
+  /** Rough share of the search done, 0..1, when the worker reported it. */
+  readonly progress?: number | null
 }
 
 /** What the user sets before a search (docs/balance.md). */
@@ -145,7 +147,7 @@ function SettingsForm({ settings, onSettings, disabled }: { settings: BalanceSet
 /** The panel's markup for a given state (pure; the stateful BalancePanel wraps it). */
 export function BalancePanelView(props: BalancePanelViewProps) {
   const { phase, result, error, elapsedS, isStale, inWorker, onFind, onApply, onStop, fault = null, slow = false } = props
-  const { canApply, settings, onSettings } = props
+  const { canApply, settings, onSettings, progress = null } = props
   const working = phase === 'working'
   const suggestions = result?.suggestions ?? []
   return (
@@ -164,7 +166,12 @@ export function BalancePanelView(props: BalancePanelViewProps) {
       {settings && onSettings ? <SettingsForm settings={settings} onSettings={onSettings} disabled={working} /> : null}
       {working ? (
         <p className="gx-working" role="status" data-testid="balance-working">
-          <progress aria-label="Searching for changes" /> Trying changes
+          {progress === null ? (
+            <progress aria-label="Searching for changes" />
+          ) : (
+            <progress aria-label="Searching for changes" max={1} value={progress} data-testid="balance-progress" />
+          )}{' '}
+          Trying changes{progress === null ? '' : ` (${Math.round(progress * 100)}%)`}
           {inWorker ? '' : ' (on the main thread)'}… {slow ? `still searching (${elapsedS} s)` : `${elapsedS} s`}
           {onStop && inWorker ? (
             <>
@@ -271,6 +278,7 @@ export function BalancePanel({ project, onApply, options, createRunner }: Balanc
   const [fault, setFault] = useState<string | null>(null)
   const [slow, setSlow] = useState(false)
   const [settings, setSettings] = useState<BalanceSettings>(DEFAULT_BALANCE_SETTINGS)
+  const [progress, setProgress] = useState<number | null>(null)
 
   useEffect(() => {
     const make =
@@ -281,6 +289,7 @@ export function BalancePanel({ project, onApply, options, createRunner }: Balanc
           suggest: suggestBalance,
           onFault: (reason, retried) => setFault(retried ? `${reason}. Restarted it and searching again.` : `${reason}. Restarted it.`),
           onSlow: () => setSlow(true),
+          onProgress: (p) => setProgress(p.fraction),
         }))
     const runner = make()
     runnerRef.current = runner
@@ -305,6 +314,7 @@ export function BalancePanel({ project, onApply, options, createRunner }: Balanc
     setError(null)
     setFault(null)
     setSlow(false)
+    setProgress(null)
     setStartedAt(Date.now())
     setElapsedS(0)
     runner.run(snapshot, { ...settings, ...(options ?? {}) }).then(
@@ -343,6 +353,7 @@ export function BalancePanel({ project, onApply, options, createRunner }: Balanc
       }}
       fault={fault}
       slow={slow}
+      progress={progress}
     />
   )
 }
