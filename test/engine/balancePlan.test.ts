@@ -101,7 +101,7 @@ describe('suggestBalance constraints and objectives', () => {
       .frameLine({ id: 'f', p1: { x: 5, y: 1 }, p2: { x: 5, y: 9 }, storyStiffness: k })
       .build()
     expect(elementOnSlabs(p, p.frameLines.f!)).toBe(false)
-    expect(elementOnSlabs(p, { ...p.frameLines.f!, top: 'L1' })).toBe(true)
+    expect(elementOnSlabs(p, { ...p.frameLines.f!, top: p.floors[0]!.id })).toBe(true)
   })
 
   it('moves the demo core as one body or thickens it as one, never a single leg', () => {
