@@ -247,10 +247,9 @@ export function BalancePanelView(props: BalancePanelViewProps) {
                       Apply
                     </button>
                     {applies ? null : (
-                      <span className="gx-muted" data-testid={`balance-not-applicable-${i}`}>
-                        {' '}
+                      <p className="gx-muted" data-testid={`balance-not-applicable-${i}`}>
                         Applied, or its elements changed (undo makes it applicable again).
-                      </span>
+                      </p>
                     )}
                   </li>
                 )
