@@ -5,7 +5,16 @@
  * Must not import: react, three, zustand, editor, viewer, ui, window/document.
  */
 export { analyzeProject } from './analyze'
-export { balanceScore, suggestBalance } from './balance'
+export {
+  BALANCE_DEFAULTS,
+  balanceMetrics,
+  balanceScore,
+  elementOnSlabs,
+  objectiveValue,
+  suggestBalance,
+  suggestionApplies,
+  worsenedMeasures,
+} from './balance'
 export { BUILT_IN_CRITERION_SETS, scopeLine } from './criteria'
 export { centreDefinitionIssues } from './centreDefinition'
 export type { BuiltInCriterionSet } from './criteria'
@@ -27,7 +36,17 @@ export type {
 export { describeWallGroups, findWallGroups } from './elements/wallGroup'
 export type { WallGroup, WallGroupSummary } from './elements/wallGroup'
 export type { CompositeSection } from './elements/wallSection'
-export type { BalanceAction, BalanceOptions, BalanceResult, BalanceSuggestion } from './balance'
+export type {
+  BalanceAction,
+  BalanceEdit,
+  BalanceMetrics,
+  BalanceObjective,
+  BalanceOptions,
+  BalanceProgress,
+  BalanceResult,
+  BalanceStep,
+  BalanceSuggestion,
+} from './balance'
 export type {
   AnalysisOptions,
   AnalysisResult,

@@ -704,6 +704,7 @@ function readWall(ctx: Ctx, p: string, id: string, o: Record<string, unknown>, r
     fallback: STIFFNESS_FACTOR_DEFAULTS.wallShear,
   })
   const joins = o.joins === undefined ? undefined : oneOf(ctx, key(p, 'joins'), o.joins, ['auto', 'apart'] as const, 'auto')
+  const locked = lockFlag(ctx, key(p, 'locked'), o.locked)
   const range = floorRange(ctx, p, o, refs)
   const stories = storyKeys(ctx, key(p, 'stories'), o.stories, refs, range, (sp, sv) => {
     const so = object(ctx, sp, sv, ['thickness', 'flexureFactor', 'shearFactor'])
@@ -740,7 +741,15 @@ function readWall(ctx: Ctx, p: string, id: string, o: Record<string, unknown>, r
     top: range!.top,
     ...(stories !== undefined ? { stories } : {}),
     ...(joins !== undefined ? { joins } : {}),
+    ...(locked ? { locked } : {}),
   }
+}
+
+/** Optional `locked` flag of walls and frame lines (absent = false). */
+function lockFlag(ctx: Ctx, path: string, v: unknown): true | undefined {
+  if (v === undefined || v === false) return undefined
+  if (v === true) return true
+  return fail(ctx, path, `must be true or false, got ${show(v)}`)
 }
 
 function readFrameStiffness(
@@ -861,6 +870,7 @@ function readFrameLine(
   const p2 = point(ctx, key(p, 'p2'), o.p2)
   const range = floorRange(ctx, p, o, refs)
   const stiffness = readFrameStiffness(ctx, key(p, 'stiffness'), o.stiffness, refs, range)
+  const locked = lockFlag(ctx, key(p, 'locked'), o.locked)
   if (ctx.errors.length > before || !range || !stiffness) return undefined
   if (p1 && p2 && p1.x === p2.x && p1.y === p2.y) {
     warn(ctx, p, 'p1 and p2 coincide: a frame line needs a direction')
@@ -873,6 +883,7 @@ function readFrameLine(
     stiffness,
     base: range.base,
     top: range.top,
+    ...(locked ? { locked } : {}),
   }
 }
 
@@ -1262,6 +1273,7 @@ function validate(ctx: Ctx, doc: RawDocument): Project | undefined {
     'top',
     'stories',
     'joins',
+    'locked',
   ])
   const frameLines = records(ctx, 'frameLines', doc.frameLines, (p, id, o) => readFrameLine(ctx, p, id, o, refs), [
     'name',
@@ -1270,6 +1282,7 @@ function validate(ctx: Ctx, doc: RawDocument): Project | undefined {
     'stiffness',
     'base',
     'top',
+    'locked',
   ])
   const columns = records(ctx, 'columns', doc.columns, (p, id, o) => readColumn(ctx, p, id, o, refs), [
     'name',

@@ -118,6 +118,8 @@ export interface Wall {
    * @see ../../docs/mechanics.md §Wall groups
    */
   readonly joins?: WallJoins
+  /** Kept as it is by the balance assistant (default false). @see ../../docs/balance.md */
+  readonly locked?: boolean
 }
 
 /** How a wall combines with walls it touches (see `Wall.joins`). */
@@ -192,6 +194,8 @@ export interface FrameLine {
   readonly stiffness: FrameStiffness
   readonly base: BaseRef
   readonly top: FloorId
+  /** Kept as it is by the balance assistant (default false). @see ../../docs/balance.md */
+  readonly locked?: boolean
 }
 
 /**

@@ -21,9 +21,9 @@ import {
   setSelection,
 } from '@/editor'
 import type { Draft, EditorStore } from '@/editor'
-import type { Issue } from '@/engine'
+import type { BalanceSuggestion, Issue } from '@/engine'
 import { demoProject } from '@/model'
-import type { BaseRef, FloorId, FrameLine, Project, UnitSystem, Wall } from '@/model'
+import type { BaseRef, FloorId, Project, UnitSystem } from '@/model'
 import { ViewerPane } from '@/viewer'
 import { BalancePanel, ReportActions } from './extras'
 import './extras/extras.css'
@@ -275,10 +275,13 @@ export function App({ store, analysis, startupNotice = null, viewerInitial, auto
     return run('edit property', () => execute(store, 'updateElement', { id, patch: patch as never }))
   }
   const onApplyBalance = useCallback(
-    (element: Wall | FrameLine): void => {
-      const { id, ...patch } = element
-      const refused = run('apply balance change', () => execute(store, 'updateElement', { id, patch: patch as never }))
-      if (refused === null) setSelection(store, [id])
+    (suggestion: BalanceSuggestion): void => {
+      const items = suggestion.edits.map(({ after }) => {
+        const { id, ...patch } = after
+        return { id, patch: patch as never }
+      })
+      const refused = run('apply balance change', () => execute(store, 'updateElements', { items }))
+      if (refused === null) setSelection(store, items.map((i) => i.id))
     },
     [run, store],
   )

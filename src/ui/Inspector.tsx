@@ -172,6 +172,22 @@ function Single(props: Props & { id: string; kind: InspectedKind }) {
     )
   }
 
+  const lockField = (r: Wall | FrameLine): void => {
+    fields.push(
+      <SelectField
+        key={`${id}-locked`}
+        label="Balance assistant"
+        value={r.locked === true ? 'locked' : 'free'}
+        testId="field-locked"
+        options={[
+          { value: 'free', label: 'may change it' },
+          { value: 'locked', label: 'keep it as it is (locked)' },
+        ]}
+        onCommit={(v) => replace({ ...r, locked: v === 'locked' ? true : undefined } as typeof r)}
+      />,
+    )
+  }
+
   switch (kind) {
     case 'walls': {
       const w = record as Wall
@@ -181,6 +197,7 @@ function Single(props: Props & { id: string; kind: InspectedKind }) {
       num('flexureFactor', 'Flexure factor f_I', w.flexureFactor, 'ratio', (v) => replace({ ...w, flexureFactor: v }), POSITIVE)
       num('shearFactor', 'Shear factor f_A', w.shearFactor, 'ratio', (v) => replace({ ...w, shearFactor: v }), POSITIVE)
       range(w, (base, top) => replace({ ...w, base, top }))
+      lockField(w)
       fields.push(
         <SelectField
           key={`${id}-joins`}
@@ -268,6 +285,7 @@ function Single(props: Props & { id: string; kind: InspectedKind }) {
         material(s.material, (m) => setS({ ...s, material: m }))
       }
       range(f, (base, top) => replace({ ...f, base, top }))
+      lockField(f)
       break
     }
     case 'columns': {

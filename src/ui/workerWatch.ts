@@ -44,6 +44,8 @@ export interface WorkerWatchConfig<In, Out> {
   readonly label: string
   /** An answer from the current worker (the job is over). */
   readonly onMessage: (data: Out) => void
+  /** Messages that report progress of the running job (the job goes on); default: none. */
+  readonly isProgress?: (data: Out) => boolean
   /**
    * The worker died (error or messageerror). It has already been replaced; `busy` says whether a
    * job was running, which the owner should now re-send or fail.
@@ -121,6 +123,10 @@ export function createWorkerWatch<In, Out>(config: WorkerWatchConfig<In, Out>): 
     if (!w) return
     w.onmessage = (event) => {
       if (worker !== w || disposed) return
+      if (config.isProgress?.(event.data)) {
+        config.onMessage(event.data)
+        return
+      }
       stopTimer()
       since = null
       config.onMessage(event.data)

@@ -30,7 +30,7 @@ describe('suggestBalance', () => {
   // x_cr = Σ k_i x_i / Σ k_i (common practice, no source), so the closed-form fixes are:
   //   move the 2k frame to x = 5:      (2k·5 + k·20) / 3k = 10
   //   stiffen the k frame by 2:        (2k·20) / 4k = 10
-  const result = suggestBalance(eccentricOneStorey(), { count: 20, maxMoveFraction: 0.5, withDriftRatios: true })
+  const result = suggestBalance(eccentricOneStorey(), { count: 20, maxMove: 10, withDriftRatios: true, maxChanges: 1 })
 
   it('finds the closed-form move of the stiff frame line', () => {
     const move = result.suggestions.find((s) => s.elementId === 'yw0' && s.action === 'move')

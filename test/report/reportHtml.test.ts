@@ -138,8 +138,19 @@ describe('buildReportHtml', () => {
           worstEccentricityRatioAfter: 0.2,
           worstDriftRatioBefore: 1.359,
           worstDriftRatioAfter: 1.12,
+          steps: [],
+          edits: [],
+          objective: 'eccentricity',
+          objectiveBefore: 0.4,
+          objectiveAfter: 0.1,
+          before: { eccentricityRms: 0.4, worstEccentricityRatio: 0.6, worstDriftRatio: 1.359, periodRatio: null },
+          after: { eccentricityRms: 0.1, worstEccentricityRatio: 0.2, worstDriftRatio: 1.12, periodRatio: null },
+          worse: [],
+          worsensDrift: false,
         },
       ],
+      objective: 'eccentricity',
+      metrics: null,
     }
     const html = buildReportHtml(project, result, { unitSystem: 'SI', balance, generatedAt: AT })
     const rows = bodyRows(tableMarkup(html, 'balance'))

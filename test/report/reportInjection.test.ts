@@ -75,8 +75,19 @@ function balanceNaming(project: Project, name: string): BalanceResult {
         worstEccentricityRatioAfter: 0.3,
         worstDriftRatioBefore: 1.3,
         worstDriftRatioAfter: 1.1,
+        steps: [],
+        edits: [],
+        objective: 'eccentricity',
+        objectiveBefore: 0.4,
+        objectiveAfter: 0.2,
+        before: { eccentricityRms: 0.4, worstEccentricityRatio: 0.6, worstDriftRatio: 1.3, periodRatio: null },
+        after: { eccentricityRms: 0.2, worstEccentricityRatio: 0.3, worstDriftRatio: 1.1, periodRatio: null },
+        worse: [],
+        worsensDrift: false,
       },
     ],
+    objective: 'eccentricity',
+    metrics: null,
   }
 }
 

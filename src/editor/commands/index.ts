@@ -28,6 +28,7 @@ import { setGrid } from './setGrid'
 import { setSlabOutline } from './setSlabOutline'
 import { unlinkTypicalFloor } from './unlinkTypicalFloor'
 import { updateElement } from './updateElement'
+import { updateElements } from './updateElements'
 import { updateMaterial } from './updateMaterial'
 
 export const commands = {
@@ -51,6 +52,7 @@ export const commands = {
   addLineMass,
   addPointMass,
   updateElement,
+  updateElements,
   moveElements,
   rotateElements,
   moveEndpoint,

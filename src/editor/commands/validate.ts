@@ -18,8 +18,8 @@ import {
 
 /** Fields each record kind may have (anything else in a patch is refused). */
 export const RECORD_FIELDS: Readonly<Record<RecordKind, readonly string[]>> = {
-  walls: ['name', 'p1', 'p2', 'thickness', 'material', 'flexureFactor', 'shearFactor', 'base', 'top', 'stories', 'joins'],
-  frameLines: ['name', 'p1', 'p2', 'stiffness', 'base', 'top'],
+  walls: ['name', 'p1', 'p2', 'thickness', 'material', 'flexureFactor', 'shearFactor', 'base', 'top', 'stories', 'joins', 'locked'],
+  frameLines: ['name', 'p1', 'p2', 'stiffness', 'base', 'top', 'locked'],
   columns: ['name', 'at', 'angle', 'Ix', 'Iy', 'material', 'fixity', 'stiffnessFactor', 'restraint', 'base', 'top'],
   slabs: ['floor', 'outline', 'openings', 'areaMass'],
   lineMasses: ['floor', 'points', 'massPerLength'],
@@ -28,7 +28,7 @@ export const RECORD_FIELDS: Readonly<Record<RecordKind, readonly string[]>> = {
 }
 
 /** Fields that may be cleared by patching them to undefined. */
-export const OPTIONAL_FIELDS: readonly string[] = ['stories', 'stiffnessFactor', 'restraint', 'polarInertia', 'joins']
+export const OPTIONAL_FIELDS: readonly string[] = ['stories', 'stiffnessFactor', 'restraint', 'polarInertia', 'joins', 'locked']
 
 /** A column's slab restraint r: absent, or in (0, 1]. */
 export function checkRestraint(r: number | undefined): Check {
@@ -113,7 +113,8 @@ function checkWall(doc: Project, w: Wall): Check {
     checkRange(doc, w.base, w.top) ??
     (w.joins === undefined || w.joins === 'auto' || w.joins === 'apart'
       ? undefined
-      : `joins: must be "auto" or "apart", got "${String(w.joins)}"`)
+      : `joins: must be "auto" or "apart", got "${String(w.joins)}"`) ??
+    checkLocked(w.locked)
   if (c) return c
   for (const [k, o] of Object.entries(w.stories ?? {})) {
     const f = `stories.${k}`
@@ -134,7 +135,8 @@ function checkFrame(doc: Project, f: FrameLine): Check {
     checkPoint('p2', f.p2) ??
     checkSegment(f.p1, f.p2) ??
     checkFrameStiffness(doc, f.stiffness) ??
-    checkRange(doc, f.base, f.top)
+    checkRange(doc, f.base, f.top) ??
+    checkLocked(f.locked)
   )
 }
 
@@ -209,4 +211,9 @@ export function checkRecord(doc: Project, kind: RecordKind, record: unknown): Ch
       throw new Error(`[editor] unknown record kind ${String(never)}`)
     }
   }
+}
+
+/** The optional balance-assistant lock: absent, true or false. */
+function checkLocked(v: unknown): Check {
+  return v === undefined || typeof v === 'boolean' ? undefined : `locked: must be true or false, got ${String(v)}`
 }

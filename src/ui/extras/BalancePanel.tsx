@@ -1,21 +1,23 @@
 /**
- * Balance assistant panel: finds single-element changes (move, lengthen, thicken, stiffen) that
- * bring the centres of rigidity towards the centres of mass, off the main thread, and lets the user
- * apply one. Everything comes in by props; the panel touches no store.
+ * Balance assistant panel: finds changes of one to three elements or cores (move, slide, lengthen,
+ * thicken, stiffen) that improve the objective the user picks, off the main thread, and lets the user
+ * apply one as one undoable edit. A suggestion stays applicable while the elements it edits are as
+ * they were (so after apply and undo it applies again). Everything comes in by props; the panel
+ * touches no store.
  */
 import { useEffect, useRef, useState } from 'react'
-import { suggestBalance } from '@/engine'
-import type { BalanceOptions, BalanceResult, BalanceSuggestion } from '@/engine'
+import { BALANCE_DEFAULTS, suggestBalance, suggestionApplies } from '@/engine'
+import type { BalanceMetrics, BalanceObjective, BalanceOptions, BalanceResult, BalanceSuggestion } from '@/engine'
 import { CAUTION, CAUTION_SHORT, formatNumber } from '@/model'
-import type { FrameLine, Project, Wall } from '@/model'
+import type { Project } from '@/model'
 import { BalanceCancelled, createBalanceRunner, createBalanceWorker } from './balanceRunner'
 import type { BalanceRunner } from './balanceRunner'
 import { CautionNote } from './CautionNote'
 
 export interface BalancePanelProps {
   readonly project: Project
-  /** Called with the changed element record (same id) when the user applies a suggestion. */
-  readonly onApply: (element: Wall | FrameLine) => void
+  /** Called when the user applies a suggestion: replace every `edits[i].after` record (same ids) as one edit. */
+  readonly onApply: (suggestion: BalanceSuggestion) => void
   /** Options of suggestBalance (default: 5 suggestions with drift ratios). */
   readonly options?: BalanceOptions
   /** Runner factory (tests, or a host that shares a worker); default: a dedicated module worker. */
@@ -32,6 +34,11 @@ export interface BalancePanelViewProps {
   readonly elapsedS: number
   /** True when the project changed since the shown suggestions were found. */
   readonly isStale: boolean
+  /** Per suggestion: whether it still applies to the current model (default: !isStale for all). */
+  readonly canApply?: readonly boolean[]
+  /** The search settings shown above the button, and their change handler (omitted: no settings). */
+  readonly settings?: BalanceSettings
+  readonly onSettings?: (next: BalanceSettings) => void
   readonly inWorker: boolean
   readonly onFind: () => void
   readonly onApply: (suggestion: BalanceSuggestion, index: number) => void
@@ -41,24 +48,106 @@ export interface BalancePanelViewProps {
   readonly fault?: string | null
   /** True when the search passed its grace period without an answer. */
   readonly slow?: boolean
+  /** Rough share of the search done, 0..1, when the worker reported it. */
+  readonly progress?: number | null
 }
 
-const n3 = (v: number | null): string => (v === null ? '–' : formatNumber(v, 3))
+/** What the user sets before a search (docs/balance.md). */
+export interface BalanceSettings {
+  readonly objective: BalanceObjective
+  /** Thinnest wall proposed, m. */
+  readonly minThickness: number
+  /** Largest move or added length, m. */
+  readonly maxMove: number
+  /** Largest number of changes in one suggestion (1 to 3). */
+  readonly maxChanges: number
+}
+
+export const DEFAULT_BALANCE_SETTINGS: BalanceSettings = {
+  objective: 'eccentricity',
+  minThickness: BALANCE_DEFAULTS.minThickness,
+  maxMove: BALANCE_DEFAULTS.maxMove,
+  maxChanges: BALANCE_DEFAULTS.maxChanges,
+}
+
+const OBJECTIVES: readonly { value: BalanceObjective; label: string }[] = [
+  { value: 'eccentricity', label: 'centres: RMS of e/r over floors' },
+  { value: 'drift', label: 'worst drift ratio max/avg' },
+  { value: 'periodRatio', label: 'period ratio torsion/translation' },
+  { value: 'mix', label: 'weighted mix of the three' },
+]
+
+const MEASURES: readonly { key: keyof BalanceMetrics; label: string }[] = [
+  { key: 'eccentricityRms', label: 'score S (RMS e/r)' },
+  { key: 'worstEccentricityRatio', label: 'worst e/r' },
+  { key: 'worstDriftRatio', label: 'worst drift max/avg' },
+  { key: 'periodRatio', label: 'period ratio T_torsion/T_transl.' },
+]
+
+const n3 = (v: number | null): string => (v === null || !Number.isFinite(v) ? '–' : formatNumber(v, 3))
 
 function BeforeAfter({ before, after }: { before: number | null; after: number | null }) {
-  const better = before !== null && after !== null && after < before
+  const known = before !== null && after !== null
+  const worse = known && after > before + 1e-6 * Math.max(1, Math.abs(before))
+  const better = known && after < before - 1e-6 * Math.max(1, Math.abs(before))
   return (
     <span className="gx-ba">
       {n3(before)} <span aria-hidden="true">→</span>
       <span className="gx-visually-hidden"> to </span>{' '}
-      <strong className={better ? 'gx-better' : 'gx-worse'}>{n3(after)}</strong>
+      <strong className={worse ? 'gx-worse' : better ? 'gx-better' : ''}>{n3(after)}</strong>
+      {worse ? <span className="gx-worse"> worse</span> : better ? ' better' : known ? ' same' : ''}
     </span>
+  )
+}
+
+function SettingsForm({ settings, onSettings, disabled }: { settings: BalanceSettings; onSettings: (s: BalanceSettings) => void; disabled: boolean }) {
+  const num = (label: string, value: number, unit: string, min: number, max: number, step: number, set: (v: number) => BalanceSettings, testId: string) => (
+    <label className="gx-field">
+      {label}{' '}
+      <input
+        type="number"
+        data-testid={testId}
+        value={value}
+        min={min}
+        max={max}
+        step={step}
+        disabled={disabled}
+        onChange={(e) => {
+          const v = Number(e.currentTarget.value)
+          if (Number.isFinite(v) && v >= min && v <= max) onSettings(set(v))
+        }}
+      />{' '}
+      {unit}
+    </label>
+  )
+  return (
+    <fieldset className="gx-balance-settings" data-testid="balance-settings" disabled={disabled}>
+      <legend>Search</legend>
+      <label className="gx-field">
+        Improve{' '}
+        <select
+          data-testid="balance-objective"
+          value={settings.objective}
+          onChange={(e) => onSettings({ ...settings, objective: e.currentTarget.value as BalanceObjective })}
+        >
+          {OBJECTIVES.map((o) => (
+            <option key={o.value} value={o.value}>
+              {o.label}
+            </option>
+          ))}
+        </select>
+      </label>
+      {num('Thinnest wall', Math.round(settings.minThickness * 1000), 'mm', 50, 2000, 10, (v) => ({ ...settings, minThickness: v / 1000 }), 'balance-min-thickness')}
+      {num('Largest move', settings.maxMove, 'm', 0.1, 100, 0.5, (v) => ({ ...settings, maxMove: v }), 'balance-max-move')}
+      {num('Changes together, up to', settings.maxChanges, '', 1, 3, 1, (v) => ({ ...settings, maxChanges: Math.round(v) }), 'balance-max-changes')}
+    </fieldset>
   )
 }
 
 /** The panel's markup for a given state (pure; the stateful BalancePanel wraps it). */
 export function BalancePanelView(props: BalancePanelViewProps) {
   const { phase, result, error, elapsedS, isStale, inWorker, onFind, onApply, onStop, fault = null, slow = false } = props
+  const { canApply, settings, onSettings, progress = null } = props
   const working = phase === 'working'
   const suggestions = result?.suggestions ?? []
   return (
@@ -70,12 +159,19 @@ export function BalancePanelView(props: BalancePanelViewProps) {
         </button>
       </header>
       <p className="gx-muted">
-        Tries one change at a time on every wall and frame line and ranks the changes by the score S (root
-        mean square of e/r over floors; 0 when every centre of rigidity sits on its centre of mass).
+        Tries moves, lengths, thicknesses and stiffnesses of walls, cores and frame lines, alone and up to
+        three together, keeping every element on its slab, cores in one piece and locked elements as they
+        are. Changes that make the worst drift ratio worse are listed after the others.
       </p>
+      {settings && onSettings ? <SettingsForm settings={settings} onSettings={onSettings} disabled={working} /> : null}
       {working ? (
         <p className="gx-working" role="status" data-testid="balance-working">
-          <progress aria-label="Searching for changes" /> Trying changes
+          {progress === null ? (
+            <progress aria-label="Searching for changes" />
+          ) : (
+            <progress aria-label="Searching for changes" max={1} value={progress} data-testid="balance-progress" />
+          )}{' '}
+          Trying changes{progress === null ? '' : ` (${Math.round(progress * 100)}%)`}
           {inWorker ? '' : ' (on the main thread)'}… {slow ? `still searching (${elapsedS} s)` : `${elapsedS} s`}
           {onStop && inWorker ? (
             <>
@@ -100,12 +196,14 @@ export function BalancePanelView(props: BalancePanelViewProps) {
       {result && !working ? (
         <>
           <p className="gx-summary" data-testid="balance-summary">
-            Current score {n3(result.score)}, worst e/r {n3(result.worstEccentricityRatio)} ({result.trials} trial
-            analyses).
+            Current score {n3(result.score)}, worst e/r {n3(result.worstEccentricityRatio)}
+            {result.metrics ? `, worst drift max/avg ${n3(result.metrics.worstDriftRatio)}, period ratio ${n3(result.metrics.periodRatio)}` : ''}{' '}
+            ({result.trials} trial analyses).
           </p>
           {isStale ? (
             <p className="gx-stale" data-testid="balance-stale">
-              The model changed since these changes were found: find changes again before applying one.
+              The model changed since these changes were found: the numbers are from the earlier model. A change
+              whose elements are as they were can still be applied; find changes again for fresh numbers.
             </p>
           ) : null}
           {suggestions.length === 0 ? (
@@ -114,36 +212,48 @@ export function BalancePanelView(props: BalancePanelViewProps) {
             </p>
           ) : (
             <ol className="gx-suggestions" data-testid="balance-suggestions">
-              {suggestions.map((s, i) => (
-                <li key={`${s.elementId}-${s.action}-${i}`} className="gx-suggestion">
-                  <p className="gx-desc">
-                    <span className="gx-rank">{i + 1}.</span> {s.description}
-                  </p>
-                  <dl className="gx-metrics">
-                    <dt>score S</dt>
-                    <dd>
-                      <BeforeAfter before={s.scoreBefore} after={s.scoreAfter} />
-                    </dd>
-                    <dt>worst e/r</dt>
-                    <dd>
-                      <BeforeAfter before={s.worstEccentricityRatioBefore} after={s.worstEccentricityRatioAfter} />
-                    </dd>
-                    <dt>worst drift max/avg</dt>
-                    <dd>
-                      <BeforeAfter before={s.worstDriftRatioBefore} after={s.worstDriftRatioAfter} />
-                    </dd>
-                  </dl>
-                  <button
-                    type="button"
-                    data-testid={`balance-apply-${i}`}
-                    onClick={() => onApply(s, i)}
-                    disabled={isStale}
-                    title={isStale ? 'The model changed; find changes again first' : 'Apply this change as one undoable edit'}
-                  >
-                    Apply
-                  </button>
-                </li>
-              ))}
+              {suggestions.map((s, i) => {
+                const applies = canApply ? canApply[i] !== false : !isStale
+                return (
+                  <li key={`${s.elementId}-${s.action}-${i}`} className="gx-suggestion" data-testid={`balance-suggestion-${i}`}>
+                    <p className="gx-desc">
+                      <span className="gx-rank">{i + 1}.</span>{' '}
+                      {s.steps.length > 1 ? `${s.steps.length} changes together: ` : ''}
+                      {s.description}
+                    </p>
+                    <dl className="gx-metrics">
+                      {MEASURES.map((m) => (
+                        <div key={m.key}>
+                          <dt>{m.label}</dt>
+                          <dd>
+                            <BeforeAfter before={s.before[m.key]} after={s.after[m.key]} />
+                          </dd>
+                        </div>
+                      ))}
+                    </dl>
+                    {s.worse.length > 0 ? (
+                      <p className="gx-worse" data-testid={`balance-worse-${i}`}>
+                        Gets worse: {s.worse.join('; ')}.
+                        {s.worsensDrift ? ' Ranked after the changes that do not worsen the drift ratio.' : ''}
+                      </p>
+                    ) : null}
+                    <button
+                      type="button"
+                      data-testid={`balance-apply-${i}`}
+                      onClick={() => onApply(s, i)}
+                      disabled={!applies}
+                      title={applies ? 'Apply this change as one undoable edit' : 'Already applied, or its elements changed since the search'}
+                    >
+                      Apply
+                    </button>
+                    {applies ? null : (
+                      <p className="gx-muted" data-testid={`balance-not-applicable-${i}`}>
+                        Applied, or its elements changed (undo makes it applicable again).
+                      </p>
+                    )}
+                  </li>
+                )
+              })}
             </ol>
           )}
         </>
@@ -166,6 +276,8 @@ export function BalancePanel({ project, onApply, options, createRunner }: Balanc
   const [inWorker, setInWorker] = useState(true)
   const [fault, setFault] = useState<string | null>(null)
   const [slow, setSlow] = useState(false)
+  const [settings, setSettings] = useState<BalanceSettings>(DEFAULT_BALANCE_SETTINGS)
+  const [progress, setProgress] = useState<number | null>(null)
 
   useEffect(() => {
     const make =
@@ -176,6 +288,7 @@ export function BalancePanel({ project, onApply, options, createRunner }: Balanc
           suggest: suggestBalance,
           onFault: (reason, retried) => setFault(retried ? `${reason}. Restarted it and searching again.` : `${reason}. Restarted it.`),
           onSlow: () => setSlow(true),
+          onProgress: (p) => setProgress(p.fraction),
         }))
     const runner = make()
     runnerRef.current = runner
@@ -200,9 +313,10 @@ export function BalancePanel({ project, onApply, options, createRunner }: Balanc
     setError(null)
     setFault(null)
     setSlow(false)
+    setProgress(null)
     setStartedAt(Date.now())
     setElapsedS(0)
-    runner.run(snapshot, options ?? {}).then(
+    runner.run(snapshot, { ...settings, ...(options ?? {}) }).then(
       (r) => {
         setResult(r)
         setRanFor(snapshot)
@@ -223,9 +337,14 @@ export function BalancePanel({ project, onApply, options, createRunner }: Balanc
       error={error}
       elapsedS={elapsedS}
       isStale={result !== null && ranFor !== project}
+      canApply={result ? result.suggestions.map((s) => suggestionApplies(project, s)) : []}
+      settings={settings}
+      onSettings={setSettings}
       inWorker={inWorker}
       onFind={find}
-      onApply={(s) => onApply(s.element)}
+      onApply={(s) => {
+        if (suggestionApplies(project, s)) onApply(s)
+      }}
       onStop={() => {
         runnerRef.current?.stop()
         setSlow(false)
@@ -233,6 +352,7 @@ export function BalancePanel({ project, onApply, options, createRunner }: Balanc
       }}
       fault={fault}
       slow={slow}
+      progress={progress}
     />
   )
 }

@@ -16,5 +16,5 @@ scope.onmessage = (event) => {
     runWorkerDebug(data)
     return
   }
-  scope.postMessage(runBalanceRequest(data, suggestBalance))
+  scope.postMessage(runBalanceRequest(data, suggestBalance, (m) => scope.postMessage(m)))
 }

@@ -6,9 +6,9 @@
  * on the same search rejects it with the reason); `stop()` terminates a long search and starts a fresh
  * worker.
  */
-import type { BalanceOptions, BalanceResult } from '@/engine'
+import type { BalanceOptions, BalanceProgress, BalanceResult } from '@/engine'
 import type { Project } from '@/model'
-import { runBalanceRequest } from './balanceProtocol'
+import { isBalanceProgress, runBalanceRequest } from './balanceProtocol'
 import type { BalanceRequest, BalanceResponse } from './balanceProtocol'
 import type { WorkerDebugMessage } from '../workerDebug'
 import { createWorkerWatch, retryAllowed } from '../workerWatch'
@@ -54,6 +54,8 @@ export interface BalanceRunnerConfig {
   readonly onFault?: (reason: string, retried: boolean) => void
   /** Called once when a search passes BALANCE_GRACE_MS without an answer. */
   readonly onSlow?: () => void
+  /** Progress reports of the running search (from the worker). */
+  readonly onProgress?: (progress: BalanceProgress) => void
   readonly timers?: WatchTimers
 }
 
@@ -79,6 +81,10 @@ export function createBalanceRunner(config: BalanceRunnerConfig): BalanceRunner 
 
   const settle = (response: BalanceResponse): void => {
     if (!pending || response.id !== pending.id) return
+    if (isBalanceProgress(response)) {
+      config.onProgress?.(response.progress)
+      return
+    }
     const p = pending
     pending = null
     if (response.ok) p.resolve(response.result)
@@ -90,6 +96,7 @@ export function createBalanceRunner(config: BalanceRunnerConfig): BalanceRunner 
     create: config.createWorker,
     ...(config.timers ? { timers: config.timers } : {}),
     onMessage: settle,
+    isProgress: (m) => isBalanceProgress(m),
     onSlow: () => config.onSlow?.(),
     onDeath: (reason, busy) => {
       const p = busy ? pending : null

@@ -82,3 +82,28 @@ describe('BalancePanelView', () => {
     expect(view({ phase: 'done', result: empty })).toContain('Already balanced.')
   })
 })
+
+describe('BalancePanelView measures and re-validation', () => {
+  it('shows all four measures before and after and says in words which get worse', () => {
+    const html = view({ phase: 'done', result: fakeBalance(boxProject()) })
+    expect(html).toContain('period ratio T_torsion/T_transl.')
+    expect(html).toContain('data-testid="balance-worse-1"')
+    expect(html).toContain('Gets worse: period ratio T_torsion/T_translation worse (1.100 → 1.200).')
+    expect(html).not.toContain('data-testid="balance-worse-0"')
+    expect(html).toMatch(/<span class="gx-worse"> worse<\/span>/)
+  })
+
+  it('enables Apply per suggestion from the re-validation, not from the stale flag', () => {
+    const html = view({ phase: 'done', result: fakeBalance(boxProject()), isStale: true, canApply: [true, false] })
+    expect(html).not.toMatch(/data-testid="balance-apply-0"[^>]*disabled=""/)
+    expect(html).toMatch(/data-testid="balance-apply-1"[^>]*disabled=""/)
+    expect(html).toContain('data-testid="balance-not-applicable-1"')
+  })
+
+  it('shows the search settings with their defaults', () => {
+    const html = renderToStaticMarkup(<BalancePanel project={boxProject()} onApply={noop} createRunner={stubRunner} />)
+    expect(html).toContain('data-testid="balance-objective"')
+    expect(html).toMatch(/data-testid="balance-min-thickness"[^>]*value="200"/)
+    expect(html).toMatch(/data-testid="balance-max-move"[^>]*value="6"/)
+  })
+})

@@ -41,6 +41,38 @@ describe('createBalanceRunner', () => {
     await expect(promise).resolves.toBe(result)
   })
 
+  it('passes progress reports on and still waits for the answer', async () => {
+    const project = boxProject()
+    const fake = fakeWorker()
+    const seen: number[] = []
+    const runner = createBalanceRunner({
+      createWorker: () => fake.worker,
+      suggest: suggestBalance,
+      onProgress: (p) => seen.push(p.fraction),
+    })
+    const promise = runner.run(project)
+    const id = fake.sent[0]?.id ?? -1
+    fake.answer({ id, progress: { phase: 'single', fraction: 0.25, trials: 10 } })
+    fake.answer({ id, progress: { phase: 'combinations', fraction: 0.7, trials: 90 } })
+    expect(seen).toEqual([0.25, 0.7])
+    const result = fakeBalance(project)
+    fake.answer({ id, ok: true, result, workerMs: 3 })
+    await expect(promise).resolves.toBe(result)
+  })
+
+  it('reports progress from the search through the request runner, throttled', () => {
+    const reports: number[] = []
+    const response = runBalanceRequest(
+      { id: 7, project: boxProject(), options: { maxChanges: 1, withDriftRatios: false } },
+      suggestBalance,
+      (m) => reports.push(m.progress.fraction),
+    )
+    expect('ok' in response && response.ok).toBe(true)
+    // the first report always passes the 200 ms throttle
+    expect(reports.length).toBeGreaterThan(0)
+    for (const f of reports) expect(f).toBeGreaterThan(0)
+  })
+
   it('cancels the older run when a newer one starts and ignores its late answer', async () => {
     const project = boxProject()
     const fake = fakeWorker()

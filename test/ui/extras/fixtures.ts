@@ -25,13 +25,23 @@ export function fakeBalance(project: Project): BalanceResult {
     worstEccentricityRatioBefore: 0.2983,
     worstDriftRatioBefore: 1.3,
     worstDriftRatioAfter: 1.0,
+    objective: 'eccentricity' as const,
+    objectiveBefore: 0.2983,
+    before: { eccentricityRms: 0.2983, worstEccentricityRatio: 0.2983, worstDriftRatio: 1.3, periodRatio: 1.1 },
+    worsensDrift: false,
   }
+  const step = (action: 'move' | 'stiffness', description: string, amount: number, after: FrameLine) => ({
+    steps: [{ targetId: west.id, action, description, amount, unit: base.unit, edits: [{ elementKind: 'frameLine' as const, before: west, after }] }],
+    edits: [{ elementKind: 'frameLine' as const, before: west, after }],
+  })
   return {
     score: 0.2983,
     worstEccentricityRatio: 0.2983,
     trials: 40,
     message: null,
     caution: CAUTION,
+    objective: 'eccentricity',
+    metrics: { eccentricityRms: 0.2983, worstEccentricityRatio: 0.2983, worstDriftRatio: 1.3, periodRatio: 1.1 },
     suggestions: [
       {
         ...base,
@@ -41,6 +51,10 @@ export function fakeBalance(project: Project): BalanceResult {
         element: moved,
         scoreAfter: 0,
         worstEccentricityRatioAfter: 0,
+        ...step('move', "Move frame line 'West line' 2.50 m towards +x (to x = 2.50 m)", -2.5, moved),
+        objectiveAfter: 0,
+        after: { eccentricityRms: 0, worstEccentricityRatio: 0, worstDriftRatio: 1.0, periodRatio: 0.9 },
+        worse: [],
       },
       {
         ...base,
@@ -50,6 +64,10 @@ export function fakeBalance(project: Project): BalanceResult {
         element: west,
         scoreAfter: 0.01,
         worstEccentricityRatioAfter: 0.01,
+        ...step('stiffness', "Soften frame line 'West line' to x0.50 of its story stiffness", 0.5, west),
+        objectiveAfter: 0.01,
+        after: { eccentricityRms: 0.01, worstEccentricityRatio: 0.01, worstDriftRatio: 1.0, periodRatio: 1.2 },
+        worse: ['period ratio T_torsion/T_translation worse (1.100 → 1.200)'],
       },
     ],
   }
