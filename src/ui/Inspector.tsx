@@ -209,9 +209,8 @@ function Single(props: Props & { id: string; kind: InspectedKind }) {
             { value: 'apart', label: 'keep this wall apart' },
           ]}
           onCommit={(v) => {
-            if (v === 'apart') return replace({ ...w, joins: 'apart' })
-            const { joins: _joins, ...auto } = w
-            return replace(auto)
+            // An absent key is not a change to the patch: clear the field explicitly (default auto).
+            return replace({ ...w, joins: v === 'apart' ? 'apart' : undefined } as typeof w)
           }}
         />,
       )

@@ -153,7 +153,16 @@ describe('plan editor on the demo building', () => {
     await expect(page.locator('[data-testid="shear-centre-core-n+core-s+core-w"]').count()).resolves.toBe(1)
     // the rest of the core is a plain C now: its stiffness and so the centre of rigidity change (statics)
     expect(distance(await markerAt(page, 'cr'), before)).toBeGreaterThan(0.01)
+    // joining it again from the same box clears the field (the core is whole again) ...
+    await page.getByTestId('field-joins').selectOption('auto')
+    await waitForCurrentAnalysis(page)
+    await expect(page.getByTestId('wall-group').textContent()).resolves.toContain('Acts with: Core north')
+    await expect(page.locator(`[data-testid="${core}"]`).count()).resolves.toBe(1)
+    // ... and undoing that keeps it apart again
     await page.keyboard.press('Escape')
+    await page.keyboard.press('Control+z')
+    await waitForCurrentAnalysis(page)
+    await expect(page.locator('[data-testid="shear-centre-core-n+core-s+core-w"]').count()).resolves.toBe(1)
     await page.keyboard.press('Control+z')
     await waitForCurrentAnalysis(page)
     await expect(page.locator(`[data-testid="${core}"]`).count()).resolves.toBe(1)
