@@ -1,7 +1,8 @@
 /**
  * Node entry: `npm run analyze -- [model.json] [--json] [--time-history] [--criteria <id>] [--units SI|US] [--balance] [--report file.html] [--csv folder]`.
  * Reads a project file, validates it, runs the engine and prints a summary (or the full JSON result).
- * Exit codes: 0 analysis completed, 1 invalid model or arguments, 2 mechanism, 3 internal error.
+ * Exit codes: 0 analysis completed, 1 invalid model or arguments, 2 mechanism, 3 internal error,
+ * 4 analysis incomplete (modes, base shears or verdicts missing).
  * Imports only model and engine: the living proof that both run without a browser.
  * @see ../../docs/cli.md
  */
@@ -28,6 +29,8 @@ export const EXIT_OK = 0
 export const EXIT_INVALID = 1
 export const EXIT_MECHANISM = 2
 export const EXIT_INTERNAL = 3
+/** The analysis ran but some numbers (modes, base shears, verdicts) could not be computed. */
+export const EXIT_INCOMPLETE = 4
 
 /** The demo building analyzed when no file is given. */
 export const DEFAULT_MODEL = fileURLToPath(new URL('../../public/examples/corner-block.json', import.meta.url))
@@ -115,6 +118,11 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
     io.err(`[engine] ${file}: the structure is a mechanism:\n`)
     for (const i of list) io.err(`${formatIssue(i)}\n`)
     return EXIT_MECHANISM
+  }
+  if (result.status === 'incomplete') {
+    io.err(`[engine] ${file}: the analysis is incomplete; numbers are missing and no verdict is a pass:\n`)
+    for (const i of result.issues.filter((x) => x.severity === 'error')) io.err(`${formatIssue(i)}\n`)
+    return EXIT_INCOMPLETE
   }
   if (result.status === 'invalid') {
     io.err(`[engine] ${file}: the model cannot be analyzed:\n`)

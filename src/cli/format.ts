@@ -48,7 +48,8 @@ const showValue = (valueSI: number, q: Quantity, units: UnitSystem, digits = 4):
 
 const pct = (ratio: number): string => (Number.isFinite(ratio) ? `${(100 * ratio).toFixed(1)}%` : '-')
 
-const VERDICT_ORDER: Record<Verdict, number> = { fail: 2, pass: 1, 'not-applicable': 0 }
+// A row that could not be checked outranks a pass: a missing number is never shown as PASS.
+const VERDICT_ORDER: Record<Verdict, number> = { fail: 3, 'not-checked': 2, pass: 1, 'not-applicable': 0 }
 
 /** The row that decides a story's verdict; among several failures the last (the stricter test). */
 function worst(rows: readonly CheckRow[]): CheckRow | undefined {
@@ -63,7 +64,7 @@ function worst(rows: readonly CheckRow[]): CheckRow | undefined {
 }
 
 function verdictText(v: Verdict): string {
-  return v === 'not-applicable' ? 'n/a' : v.toUpperCase()
+  return v === 'not-applicable' ? 'n/a' : v === 'not-checked' ? 'NOT CHECKED' : v.toUpperCase()
 }
 
 function floorsSection(result: AnalysisResult, units: UnitSystem): string {
@@ -323,7 +324,7 @@ export function formatSummary(result: AnalysisResult, units: UnitSystem = 'SI'):
     '',
     floorsSection(result, units),
   ]
-  if (result.status === 'ok') {
+  if (result.status === 'ok' || result.status === 'incomplete') {
     parts.push('', modesSection(result))
     parts.push('', result.torsion ? torsionSection(result.torsion, result, units) : 'Torsion check: not computed')
     parts.push('', regularitySection(result))

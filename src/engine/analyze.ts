@@ -9,6 +9,7 @@ import { computeCentres } from './centres'
 import { evaluateRegularity, resolveCriterionSet } from './criteria'
 import { runStaticTorsion } from './loads'
 import { solveModes } from './modal'
+import { incompleteIssue, missingResults, noModesReason } from './completeness'
 import type { AnalysisOptions, AnalysisResult, Issue } from './results'
 import { createStiffnessSolver } from './solve'
 import { runSpectrum } from './spectrum'
@@ -18,7 +19,8 @@ const now = (): number => (typeof performance !== 'undefined' ? performance.now(
 
 /**
  * Analyze a validated project (SI units). Never throws for a bad model: problems come back as
- * `issues` and `status` ('mechanism' when the stiffness is singular or nearly so).
+ * `issues` and `status` ('mechanism' when the stiffness is singular or nearly so, 'incomplete' when
+ * modes, base shears or verdicts could not be computed; never 'ok' with a missing number).
  * @see docs/results-format.md
  */
 export function analyzeProject(project: Project, options: AnalysisOptions = {}): AnalysisResult {
@@ -92,6 +94,12 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
 
   const criterion = resolveCriterionSet(project.settings, options.criterionSet)
   issues.push(...criterion.issues)
+  if (modes.count === 0) {
+    // Without a single mode there is no period for the static loads and nothing for the spectrum or
+    // the time history: leave them out rather than show zeros and a pass (docs/results-format.md).
+    issues.push(incompleteIssue(noModesReason(structure, modes.issues ?? [])))
+    return { ...base, status: 'incomplete', issues, modes, centres, regularity: null }
+  }
   const torsion = runStaticTorsion(structure, solver.solver, modes, project.settings, criterion.set)
   lap('torsion')
   const regularity = criterion.set ? evaluateRegularity(structure, centres, criterion.set) : null
@@ -101,9 +109,12 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
   const timeHistory = options.timeHistory ? runTimeHistory(structure, modes, project.settings) : null
   if (options.timeHistory) lap('timeHistory')
 
+  const missing = missingResults(torsion, regularity, spectrum)
+  for (const why of missing) issues.push(incompleteIssue(why))
+
   return {
     ...base,
-    status: 'ok',
+    status: missing.length > 0 ? 'incomplete' : 'ok',
     issues,
     modes,
     centres,

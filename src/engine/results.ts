@@ -26,6 +26,7 @@ export type IssueCode =
   | 'eigen-incomplete'
   | 'criterion-unknown'
   | 'not-applicable'
+  | 'incomplete'
 
 /** A user-model problem (never an exception). `refs` are ids to highlight (elements, floors). */
 export interface Issue {
@@ -158,7 +159,11 @@ export interface FloorCentres {
 
 // ---------------------------------------------------------------- criteria (loads)
 
-export type Verdict = 'pass' | 'fail' | 'not-applicable'
+/**
+ * 'not-checked': the rule applies but its number could not be computed (no movement at the extreme
+ * points, a floor without plan extent across the load, a missing period); never counted as a pass.
+ */
+export type Verdict = 'pass' | 'fail' | 'not-applicable' | 'not-checked'
 
 /** One check row of a criterion set. */
 export interface CheckRow {
@@ -317,7 +322,12 @@ export interface TimeHistoryResult {
 
 // ---------------------------------------------------------------- whole analysis
 
-export type AnalysisStatus = 'ok' | 'invalid' | 'mechanism'
+/**
+ * 'ok': every requested section computed. 'incomplete': the structure was analysed but modes, base
+ * shears or verdicts are missing (an 'incomplete' issue says which and why). 'mechanism', 'invalid':
+ * see docs/results-format.md.
+ */
+export type AnalysisStatus = 'ok' | 'incomplete' | 'invalid' | 'mechanism'
 
 /** Options of `analyzeProject`. */
 export interface AnalysisOptions {

@@ -237,7 +237,7 @@ function checkRefusal(errors: readonly string[]): void {
 
 function checkResult(result: AnalysisResult): void {
   expect(result.caution).toBe(CAUTION)
-  expect(['ok', 'invalid', 'mechanism']).toContain(result.status)
+  expect(['ok', 'incomplete', 'invalid', 'mechanism']).toContain(result.status)
   const bad = nonFinite({ ...result, timings: {} })
   expect(bad, `non-finite numbers (status ${result.status})`).toEqual([])
   if (result.status !== 'ok') {
