@@ -68,3 +68,11 @@ export {
 } from './units'
 export type { Quantity, UnitSystem } from './units'
 export { demoProject } from './demo'
+export {
+  POLYGON_TOLERANCE,
+  openingProblems,
+  polygonSignedArea,
+  simplePolygonProblem,
+  slabPolygonProblems,
+} from './polygons'
+export type { PolygonProblem } from './polygons'

@@ -5,6 +5,7 @@
  * `walls.w12.thickness: must be > 0, got -0.2`.
  * @see ../../docs/file-format.md for every field, unit, range and default.
  */
+import { openingProblems } from './polygons'
 import type { FloorId } from './ids'
 import { migrateDocument } from './migrations'
 import type { RawDocument } from './migrations'
@@ -293,24 +294,6 @@ function segmentsTouch(a: Point, b: Point, c: Point, d: Point): boolean {
   )
 }
 
-/** Point in polygon, points on the boundary count as inside (tolerance relative to the extent). */
-function insideOrOn(pts: readonly Point[], p: Point, tol: number): boolean {
-  let inside = false
-  for (let i = 0, j = pts.length - 1; i < pts.length; j = i++) {
-    const a = pts[i] as Point
-    const b = pts[j] as Point
-    const dx = b.x - a.x
-    const dy = b.y - a.y
-    const len2 = dx * dx + dy * dy
-    const t = len2 > 0 ? Math.max(0, Math.min(1, ((p.x - a.x) * dx + (p.y - a.y) * dy) / len2)) : 0
-    if (Math.hypot(p.x - (a.x + t * dx), p.y - (a.y + t * dy)) <= tol) return true
-    if (a.y > p.y !== b.y > p.y && p.x < ((b.x - a.x) * (p.y - a.y)) / (b.y - a.y) + a.x) {
-      inside = !inside
-    }
-  }
-  return inside
-}
-
 function polygon(ctx: Ctx, path: string, v: unknown): Point[] | undefined {
   const raw = list(ctx, path, v)
   if (!raw) return undefined
@@ -592,22 +575,15 @@ function readSlab(ctx: Ctx, p: string, id: string, o: Record<string, unknown>, r
       openingsOk = false
       return
     }
-    if (outline) {
-      const span = Math.max(...outline.map((q) => Math.abs(q.x)), ...outline.map((q) => Math.abs(q.y)), 1)
-      const outside = hole.findIndex((q) => !insideOrOn(outline, q, 1e-9 * span))
-      if (outside >= 0) {
-        const q = hole[outside] as Point
-        fail(
-          ctx,
-          at(key(p, 'openings'), i),
-          `must lie inside the outline (vertex ${outside} at (${q.x}, ${q.y}) is outside)`,
-        )
-        openingsOk = false
-        return
-      }
-    }
     openings.push(hole)
   })
+  if (outline && openingsOk) {
+    // Inside the outline, not crossing it, not overlapping, nesting in or crossing each other (polygons.ts).
+    for (const problem of openingProblems(outline, openings)) {
+      fail(ctx, `${p}.${problem.path}`, problem.message)
+      openingsOk = false
+    }
+  }
   if (outline && openingsOk) {
     const net = Math.abs(signedArea(outline)) - openings.reduce((s, h) => s + Math.abs(signedArea(h)), 0)
     if (!(net > 1e-9 * Math.abs(signedArea(outline)))) {
