@@ -6,12 +6,12 @@
  * Imports only model and engine: the living proof that both run without a browser.
  * @see ../../docs/cli.md
  */
-import { mkdirSync, readFileSync, writeFileSync } from 'node:fs'
+import { mkdirSync, readFileSync, statSync, writeFileSync } from 'node:fs'
 import { dirname, join, resolve } from 'node:path'
 import { fileURLToPath } from 'node:url'
 import { analyzeProject, suggestBalance } from '@/engine'
 import type { AnalysisOptions } from '@/engine'
-import { CAUTION, parseProjectText } from '@/model'
+import { CAUTION, checkFileSizeBudget, parseProjectText } from '@/model'
 import { buildReportHtml, buildResultTables, csvFileName, toCsv } from '@/report'
 import { USAGE, parseArgs } from './args'
 import { formatBalance, formatIssue, formatResultJson, formatSummary } from './format'
@@ -21,6 +21,8 @@ export interface CliIo {
   readonly out: (text: string) => void
   readonly err: (text: string) => void
   readonly readFile: (path: string) => string
+  /** Size of a file in bytes, checked against the input budget before reading (optional in tests). */
+  readonly fileSize?: (path: string) => number
   /** Write a text file, creating its folder (used by --report and --csv). */
   readonly writeFile: (path: string, text: string) => void
 }
@@ -39,6 +41,7 @@ const nodeIo: CliIo = {
   out: (text) => process.stdout.write(text),
   err: (text) => process.stderr.write(text),
   readFile: (path) => readFileSync(path, 'utf8'),
+  fileSize: (path) => statSync(path).size,
   writeFile: (path, text) => {
     mkdirSync(dirname(path), { recursive: true })
     writeFileSync(path, text, 'utf8')
@@ -60,6 +63,12 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
   const file = o.file ?? DEFAULT_MODEL
   let text: string
   try {
+    // Stat first: a file over the budget is refused without reading it (docs/file-format.md, Limits).
+    const tooBig = io.fileSize ? checkFileSizeBudget(io.fileSize(file)) : null
+    if (tooBig) {
+      io.err(`[file] ${file}: ${tooBig.replace(/^\(file\): /, '')}\n`)
+      return EXIT_INVALID
+    }
     text = io.readFile(file)
   } catch (error) {
     io.err(`[file] cannot read ${file}: ${(error as Error).message}\n`)

@@ -11,7 +11,7 @@ import type {
   StaticTorsionResult,
   Verdict,
 } from '@/engine'
-import { CAUTION, formatNumber, toDisplay, unitLabel } from '@/model'
+import { CAUTION, formatNumber, maxOf, toDisplay, unitLabel } from '@/model'
 import type { Quantity, UnitSystem } from '@/model'
 
 type Align = 'left' | 'right'
@@ -23,7 +23,7 @@ interface Column {
 
 /** A text table: header row, a rule, then the rows; numbers right-aligned. */
 export function formatTable(columns: readonly Column[], rows: readonly (readonly string[])[]): string {
-  const widths = columns.map((c, j) => Math.max(c.header.length, ...rows.map((r) => (r[j] ?? '').length)))
+  const widths = columns.map((c, j) => maxOf(rows.map((r) => (r[j] ?? '').length), c.header.length))
   const cell = (text: string, j: number): string => {
     const w = widths[j] ?? 0
     return (columns[j]?.align ?? 'right') === 'left' ? text.padEnd(w) : text.padStart(w)

@@ -2,7 +2,7 @@
  * The whole analysis of one project: structure, modes, centres, static torsion cases, criterion
  * checks, response spectrum and (on request) time history. Pure; runs in node, a worker or a test.
  */
-import { CAUTION } from '@/model'
+import { appendAll, CAUTION } from '@/model'
 import type { Project } from '@/model'
 import { buildStructure } from './assemble'
 import { computeCentres } from './centres'
@@ -34,7 +34,7 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
   }
 
   const built = buildStructure(project)
-  issues.push(...built.issues)
+  appendAll(issues, built.issues)
   lap('assemble')
   const structure = built.structure
   const empty = {

@@ -76,3 +76,5 @@ export {
   slabPolygonProblems,
 } from './polygons'
 export type { PolygonProblem } from './polygons'
+export { appendAll, maxOf, minOf, pointsExtent } from './arrays'
+export { INPUT_BUDGET, checkDocumentBudget, checkFileSizeBudget, checkTextBudget } from './budget'

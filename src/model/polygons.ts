@@ -70,6 +70,45 @@ export function pointInPolygon(pts: readonly Point[], p: Point, tol: number): 'i
   return inside ? 'inside' : 'outside'
 }
 
+/**
+ * The first pair of edges (i < j, edge k from vertex k to k+1) of a closed ring for which `test` holds,
+ * among pairs whose bounding boxes overlap within `tol`; null if none. A sweep along x over edges
+ * sorted by their left end keeps only the edges still open, so a plain outline of n vertices costs
+ * about n log n rather than n²/2 pair tests.
+ */
+export function findEdgePair(
+  pts: readonly Point[],
+  tol: number,
+  test: (i: number, j: number) => boolean,
+): [number, number] | null {
+  const n = pts.length
+  const lo = new Float64Array(n)
+  const hi = new Float64Array(n)
+  const ylo = new Float64Array(n)
+  const yhi = new Float64Array(n)
+  for (let k = 0; k < n; k++) {
+    const a = pts[k]!
+    const b = pts[(k + 1) % n]!
+    lo[k] = Math.min(a.x, b.x) - tol
+    hi[k] = Math.max(a.x, b.x) + tol
+    ylo[k] = Math.min(a.y, b.y) - tol
+    yhi[k] = Math.max(a.y, b.y) + tol
+  }
+  const order = Array.from({ length: n }, (_, k) => k).sort((a, b) => lo[a]! - lo[b]!)
+  let active: number[] = []
+  for (const e of order) {
+    active = active.filter((k) => hi[k]! >= lo[e]!)
+    for (const k of active) {
+      if (ylo[k]! > yhi[e]! || ylo[e]! > yhi[k]!) continue
+      const i = Math.min(k, e)
+      const j = Math.max(k, e)
+      if (test(i, j)) return [i, j]
+    }
+    active.push(e)
+  }
+  return null
+}
+
 /** Coordinate scale of some rings for the tolerance: the largest |x|, |y|, at least 1 m. */
 export function polygonScale(rings: readonly (readonly Point[])[]): number {
   let s = 1
@@ -79,8 +118,8 @@ export function polygonScale(rings: readonly (readonly Point[])[]): number {
 
 /**
  * Why a ring is not a simple polygon, or null: fewer than 3 vertices, a repeated vertex, no area, or
- * two edges that cross or touch (other than neighbours at their shared vertex). O(n²) in the vertex
- * count; the loader's vertex budget bounds it.
+ * two edges that cross or touch (other than neighbours at their shared vertex). Pairs are found by
+ * the x sweep of findEdgePair.
  */
 export function simplePolygonProblem(pts: readonly Point[], tol: number): string | null {
   const n = pts.length
@@ -106,29 +145,32 @@ export function simplePolygonProblem(pts: readonly Point[], tol: number): string
   if (!(Math.abs(polygonSignedArea(pts)) > 1e-9 * Math.max(1, span * span))) {
     return 'must enclose a non-zero area (the vertices are in one line)'
   }
-  for (let i = 0; i < n; i++) {
+  let problem: string | null = null
+  findEdgePair(pts, tol, (i, j) => {
     const a = pts[i]!
     const b = pts[(i + 1) % n]!
-    for (let j = i + 1; j < n; j++) {
-      const c = pts[j]!
-      const d = pts[(j + 1) % n]!
-      const adjacent = j === i + 1 || (i === 0 && j === n - 1)
-      if (adjacent) {
-        // Neighbours share one vertex; they may not fold back onto each other.
-        const shared = j === i + 1 ? b : a
-        const far = j === i + 1 ? d : c
-        const other = j === i + 1 ? a : b
-        if (side(other, shared, far, tol) === 0 && (far.x - shared.x) * (other.x - shared.x) + (far.y - shared.y) * (other.y - shared.y) > 0) {
-          return `edges ${i}-${(i + 1) % n} and ${j}-${(j + 1) % n} fold back onto each other (an outline must not cross itself)`
-        }
-        continue
+    const c = pts[j]!
+    const d = pts[(j + 1) % n]!
+    const adjacent = j === i + 1 || (i === 0 && j === n - 1)
+    if (adjacent) {
+      // Neighbours share one vertex; they may not fold back onto each other.
+      const shared = j === i + 1 ? b : a
+      const far = j === i + 1 ? d : c
+      const other = j === i + 1 ? a : b
+      const back = (far.x - shared.x) * (other.x - shared.x) + (far.y - shared.y) * (other.y - shared.y) > 0
+      if (side(other, shared, far, tol) === 0 && back) {
+        problem = `edges ${i}-${(i + 1) % n} and ${j}-${(j + 1) % n} fold back onto each other (an outline must not cross itself)`
+        return true
       }
-      if (segmentsCross(a, b, c, d, tol) || touches(a, b, c, d, tol)) {
-        return `edges ${i}-${(i + 1) % n} and ${j}-${(j + 1) % n} cross or touch (an outline must not cross itself)`
-      }
+      return false
     }
-  }
-  return null
+    if (segmentsCross(a, b, c, d, tol) || touches(a, b, c, d, tol)) {
+      problem = `edges ${i}-${(i + 1) % n} and ${j}-${(j + 1) % n} cross or touch (an outline must not cross itself)`
+      return true
+    }
+    return false
+  })
+  return problem
 }
 
 /** Whether closed segments ab and cd share a point (an end of one within tol of the other). */

@@ -5,7 +5,8 @@
  * `walls.w12.thickness: must be > 0, got -0.2`.
  * @see ../../docs/file-format.md for every field, unit, range and default.
  */
-import { openingProblems } from './polygons'
+import { INPUT_BUDGET, checkDocumentBudget, checkTextBudget } from './budget'
+import { findEdgePair, openingProblems } from './polygons'
 import type { FloorId } from './ids'
 import { migrateDocument } from './migrations'
 import type { RawDocument } from './migrations'
@@ -51,7 +52,7 @@ export const LIMITS = {
   coordinate: 1e4,
   storyHeightMin: 0.1,
   storyHeightMax: 200,
-  floorsMax: 300,
+  floorsMax: INPUT_BUDGET.floors,
   thicknessMin: 0.001,
   thicknessMax: 10,
   modulusMin: 1e6,
@@ -72,11 +73,11 @@ export const LIMITS = {
   massPerLengthMax: 1e6,
   pointMassMax: 1e9,
   polarInertiaMax: 1e13,
-  verticesMax: 10000,
+  verticesMax: INPUT_BUDGET.verticesPerPolygon,
   spectrumMax: 20,
   periodMax: 100,
   baseShearMax: 1e12,
-  recordSamplesMax: 200000,
+  recordSamplesMax: INPUT_BUDGET.groundMotionSamples,
   recordDtMin: 1e-4,
   recordDtMax: 1,
   groundAccelerationMax: 1000,
@@ -334,22 +335,19 @@ function polygon(ctx: Ctx, path: string, v: unknown): Point[] | undefined {
   if (!(Math.abs(signedArea(pts)) > 1e-9 * Math.max(1, span * span))) {
     return fail(ctx, path, 'must enclose a non-zero area (the vertices are in one line)')
   }
-  for (let i = 0; i < n; i++) {
-    for (let j = i + 1; j < n; j++) {
-      // Adjacent edges share a vertex by construction; skip them (and the wrap-around pair).
-      if (j === i + 1 || (i === 0 && j === n - 1)) continue
-      const a = pts[i] as Point
-      const b = pts[(i + 1) % n] as Point
-      const c = pts[j] as Point
-      const d = pts[(j + 1) % n] as Point
-      if (segmentsTouch(a, b, c, d)) {
-        return fail(
-          ctx,
-          path,
-          `edges ${i}-${(i + 1) % n} and ${j}-${(j + 1) % n} cross or touch (an outline must not cross itself)`,
-        )
-      }
-    }
+  // Exact predicates on the input; candidate pairs from the x sweep (bounding boxes overlap).
+  const pair = findEdgePair(pts, 0, (i, j) => {
+    // Adjacent edges share a vertex by construction; skip them (and the wrap-around pair).
+    if (j === i + 1 || (i === 0 && j === n - 1)) return false
+    return segmentsTouch(pts[i] as Point, pts[(i + 1) % n] as Point, pts[j] as Point, pts[(j + 1) % n] as Point)
+  })
+  if (pair) {
+    const [i, j] = pair
+    return fail(
+      ctx,
+      path,
+      `edges ${i}-${(i + 1) % n} and ${j}-${(j + 1) % n} cross or touch (an outline must not cross itself)`,
+    )
   }
   return pts
 }
@@ -1251,6 +1249,9 @@ export function parseProject(input: unknown): ParseResult {
       errors: [`version ${version} is newer than this Gyre (reads up to ${CURRENT_VERSION}): update Gyre`],
     }
   }
+  // Size first, on counts only: an absurd file is refused before any per-field work.
+  const overBudget = checkDocumentBudget(input)
+  if (overBudget.length > 0) return { ok: false, errors: overBudget }
   const migrated = migrateDocument(input, CURRENT_VERSION)
   if (!migrated.ok) return { ok: false, errors: migrated.errors }
   const ctx: Ctx = { errors: [], warnings: [] }
@@ -1264,6 +1265,8 @@ export function parseProject(input: unknown): ParseResult {
 
 /** Parse the text of a project file (JSON), then as `parseProject`. Never throws. */
 export function parseProjectText(text: string): ParseResult {
+  const tooLong = checkTextBudget(text.length)
+  if (tooLong) return { ok: false, errors: [tooLong] }
   let data: unknown
   try {
     data = JSON.parse(text)

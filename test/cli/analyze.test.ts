@@ -199,6 +199,26 @@ describe('runCli on an incomplete analysis', () => {
   })
 })
 
+describe('runCli on a file over the byte budget', () => {
+  it('exits 1 after a stat, without reading the file', () => {
+    let read = false
+    let err = ''
+    const io: CliIo = {
+      out: () => undefined,
+      err: (t) => (err += t),
+      readFile: () => {
+        read = true
+        return '{}'
+      },
+      fileSize: () => 100 * 1024 * 1024,
+      writeFile: () => undefined,
+    }
+    expect(runCli(['huge.json'], io)).toBe(EXIT_INVALID)
+    expect(read).toBe(false)
+    expect(err).toBe('[file] huge.json: 104857600 bytes is more than the budget of 67108864 bytes (64 MiB; docs/file-format.md, Limits)\n')
+  })
+})
+
 describe('the analyze script (node process)', () => {
   const tsx = `${root}node_modules/.bin/tsx`
   const script = `${root}src/cli/analyze.ts`
