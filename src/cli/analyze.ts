@@ -2,16 +2,17 @@
  * Node entry: `npm run analyze -- [model.json] [--json] [--time-history] [--criteria <id>] [--units SI|US] [--balance] [--report file.html] [--csv folder] [--system preset[,presetY]] [--risk-category I..IV]`.
  * Reads a project file, validates it, runs the engine and prints a summary (or the full JSON result).
  * Exit codes: 0 analysis completed, 1 invalid model or arguments (including an output path that cannot
- * be written or would overwrite the model, and an unknown --criteria id), 2 mechanism, 3 internal error.
+ * be written or would overwrite the model, and an unknown --criteria id), 2 mechanism, 3 internal error,
+ * 4 analysis incomplete (modes, base shears or verdicts missing).
  * Imports only model and engine: the living proof that both run without a browser.
  * @see ../../docs/cli.md
  */
-import { mkdirSync, readFileSync, writeFileSync } from 'node:fs'
+import { mkdirSync, readFileSync, statSync, writeFileSync } from 'node:fs'
 import { dirname, join, resolve } from 'node:path'
 import { fileURLToPath } from 'node:url'
 import { BUILT_IN_CRITERION_SETS, analyzeProject, suggestBalance } from '@/engine'
 import type { AnalysisOptions } from '@/engine'
-import { CAUTION, parseProjectText } from '@/model'
+import { CAUTION, checkFileSizeBudget, parseProjectText } from '@/model'
 import { TABLE_IDS, buildReportHtml, buildResultTables, csvFileName, toCsv } from '@/report'
 import { seismicDesignFromOption } from './seismicOption'
 import { USAGE, parseArgs } from './args'
@@ -25,6 +26,8 @@ export interface CliIo {
   readonly out: (text: string) => void
   readonly err: (text: string) => void
   readonly readFile: (path: string) => string
+  /** Size of a file in bytes, checked against the input budget before reading (optional in tests). */
+  readonly fileSize?: (path: string) => number
   /** Write a text file, creating its folder (used by --report and --csv). */
   readonly writeFile: (path: string, text: string) => void
   /** What is at a path (default: the real file system); output paths are checked with it first. */
@@ -37,6 +40,8 @@ export const EXIT_OK = 0
 export const EXIT_INVALID = 1
 export const EXIT_MECHANISM = 2
 export const EXIT_INTERNAL = 3
+/** The analysis ran but some numbers (modes, base shears, verdicts) could not be computed. */
+export const EXIT_INCOMPLETE = 4
 
 /** The demo building analyzed when no file is given. */
 export const DEFAULT_MODEL = fileURLToPath(new URL('../../public/examples/corner-block.json', import.meta.url))
@@ -45,6 +50,7 @@ const nodeIo: CliIo = {
   out: (text) => process.stdout.write(text),
   err: (text) => process.stderr.write(text),
   readFile: (path) => readFileSync(path, 'utf8'),
+  fileSize: (path) => statSync(path).size,
   writeFile: (path, text) => {
     mkdirSync(dirname(path), { recursive: true })
     writeFileSync(path, text, 'utf8')
@@ -85,6 +91,12 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
   }
   let text: string
   try {
+    // Stat first: a file over the budget is refused without reading it (docs/file-format.md, Limits).
+    const tooBig = io.fileSize ? checkFileSizeBudget(io.fileSize(file)) : null
+    if (tooBig) {
+      io.err(`[file] ${file}: ${tooBig.replace(/^\(file\): /, '')}\n`)
+      return EXIT_INVALID
+    }
     text = io.readFile(file)
   } catch (error) {
     io.err(`[file] cannot read ${file}: ${(error as Error).message}\n`)
@@ -191,6 +203,11 @@ export function runCli(argv: readonly string[], io: CliIo = nodeIo): number {
     io.err(`[engine] ${file}: the structure is a mechanism:\n`)
     for (const i of list) io.err(`${formatIssue(i)}\n`)
     return EXIT_MECHANISM
+  }
+  if (result.status === 'incomplete') {
+    io.err(`[engine] ${file}: the analysis is incomplete; numbers are missing and no verdict is a pass:\n`)
+    for (const i of result.issues.filter((x) => x.severity === 'error')) io.err(`${formatIssue(i)}\n`)
+    return EXIT_INCOMPLETE
   }
   if (result.status === 'invalid') {
     io.err(`[engine] ${file}: the model cannot be analyzed:\n`)

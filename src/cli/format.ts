@@ -12,7 +12,7 @@ import type {
   Verdict,
 } from '@/engine'
 import { scopeLine } from '@/engine'
-import { CAUTION, formatNumber, toDisplay, unitLabel } from '@/model'
+import { CAUTION, formatNumber, maxOf, toDisplay, unitLabel } from '@/model'
 import type { Quantity, UnitSystem } from '@/model'
 import { designDetailSection, designLeadSection } from './formatDesign'
 
@@ -25,7 +25,7 @@ interface Column {
 
 /** A text table: header row, a rule, then the rows; numbers right-aligned. */
 export function formatTable(columns: readonly Column[], rows: readonly (readonly string[])[]): string {
-  const widths = columns.map((c, j) => Math.max(c.header.length, ...rows.map((r) => (r[j] ?? '').length)))
+  const widths = columns.map((c, j) => maxOf(rows.map((r) => (r[j] ?? '').length), c.header.length))
   const cell = (text: string, j: number): string => {
     const w = widths[j] ?? 0
     return (columns[j]?.align ?? 'right') === 'left' ? text.padEnd(w) : text.padStart(w)
@@ -50,7 +50,8 @@ const showValue = (valueSI: number, q: Quantity, units: UnitSystem, digits = 4):
 
 const pct = (ratio: number): string => (Number.isFinite(ratio) ? `${(100 * ratio).toFixed(1)}%` : '-')
 
-const VERDICT_ORDER: Record<Verdict, number> = { fail: 2, pass: 1, 'not-applicable': 0 }
+// A row that could not be checked outranks a pass: a missing number is never shown as PASS.
+const VERDICT_ORDER: Record<Verdict, number> = { fail: 3, 'not-checked': 2, pass: 1, 'not-applicable': 0 }
 
 /** The row that decides a story's verdict; among several failures the last (the stricter test). */
 function worst(rows: readonly CheckRow[]): CheckRow | undefined {
@@ -65,7 +66,7 @@ function worst(rows: readonly CheckRow[]): CheckRow | undefined {
 }
 
 function verdictText(v: Verdict): string {
-  return v === 'not-applicable' ? 'n/a' : v.toUpperCase()
+  return v === 'not-applicable' ? 'n/a' : v === 'not-checked' ? 'NOT CHECKED' : v.toUpperCase()
 }
 
 function floorsSection(result: AnalysisResult, units: UnitSystem): string {
@@ -331,7 +332,7 @@ export function formatSummary(result: AnalysisResult, units: UnitSystem = 'SI'):
     '',
     floorsSection(result, units),
   ]
-  if (result.status === 'ok') {
+  if (result.status === 'ok' || result.status === 'incomplete') {
     parts.push('', modesSection(result))
     parts.push('', designLeadSection(result, units))
     parts.push('', result.torsion ? torsionSection(result.torsion, result, units) : 'Torsion check: not computed')

@@ -115,7 +115,7 @@ export function addedIds(diff: DocDiff): string[] {
   const ids: string[] = []
   for (const kind of RECORD_KINDS) {
     const r = diff.records[kind]
-    if (r) ids.push(...Object.keys(r.added))
+    if (r) for (const id of Object.keys(r.added)) ids.push(id)
   }
   return ids
 }

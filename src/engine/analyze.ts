@@ -2,7 +2,7 @@
  * The whole analysis of one project: structure, modes, centres, static torsion cases, criterion
  * checks, response spectrum and (on request) time history. Pure; runs in node, a worker or a test.
  */
-import { CAUTION } from '@/model'
+import { appendAll, CAUTION } from '@/model'
 import type { Project } from '@/model'
 import { buildStructure } from './assemble'
 import { computeCentres } from './centres'
@@ -11,6 +11,7 @@ import { evaluateRegularity, resolveCriterionSet } from './criteria'
 import { computeElf, elfLoading, runDesign } from './design'
 import { runStaticTorsion } from './loads'
 import { solveModes } from './modal'
+import { incompleteIssue, missingResults, noModesReason } from './completeness'
 import type { AnalysisOptions, AnalysisResult, Issue } from './results'
 import { createStiffnessSolver } from './solve'
 import { computeElementForces } from './elementForces'
@@ -21,7 +22,8 @@ const now = (): number => (typeof performance !== 'undefined' ? performance.now(
 
 /**
  * Analyze a validated project (SI units). Never throws for a bad model: problems come back as
- * `issues` and `status` ('mechanism' when the stiffness is singular or nearly so).
+ * `issues` and `status` ('mechanism' when the stiffness is singular or nearly so, 'incomplete' when
+ * modes, base shears or verdicts could not be computed; never 'ok' with a missing number).
  * @see docs/results-format.md
  */
 export function analyzeProject(project: Project, options: AnalysisOptions = {}): AnalysisResult {
@@ -35,7 +37,7 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
   }
 
   const built = buildStructure(project)
-  issues.push(...built.issues)
+  appendAll(issues, built.issues)
   lap('assemble')
   const structure = built.structure
   const empty = {
@@ -97,6 +99,12 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
 
   const criterion = resolveCriterionSet(project.settings, options.criterionSet)
   issues.push(...criterion.issues)
+  if (modes.count === 0) {
+    // Without a single mode there is no period for the static loads and nothing for the spectrum or
+    // the time history: leave them out rather than show zeros and a pass (docs/results-format.md).
+    issues.push(incompleteIssue(noModesReason(structure, modes.issues ?? [])))
+    return { ...base, status: 'incomplete', issues, modes, centres, regularity: null }
+  }
   const seismic = project.settings.seismicDesign
   const elf = seismic ? computeElf(structure, modes, seismic, project.settings.spectrum) : null
   if (elf) issues.push(...elf.issues)
@@ -132,9 +140,12 @@ export function analyzeProject(project: Project, options: AnalysisOptions = {}):
       : null
   lap('design')
 
+  const missing = missingResults(torsion, regularity, spectrum)
+  for (const why of missing) issues.push(incompleteIssue(why))
+
   return {
     ...base,
-    status: 'ok',
+    status: missing.length > 0 ? 'incomplete' : 'ok',
     issues,
     modes,
     centres,

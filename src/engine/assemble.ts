@@ -3,7 +3,7 @@
  * with the floor mass properties and the assembled-element records used downstream.
  * @see MODELING.md §Degrees of freedom, §Mass, §Lateral-resisting elements; docs/mechanics.md
  */
-import { computeElevations } from '@/model'
+import { appendAll, computeElevations } from '@/model'
 import type { Project } from '@/model'
 import { DOFS_PER_FLOOR } from './dofs'
 import { buildColumnElements } from './elements/column'
@@ -85,7 +85,7 @@ export function buildStructure(project: Project): {
       })
     }
     const fm = computeFloorMass(project, floor.id)
-    issues.push(...fm.issues)
+    appendAll(issues, fm.issues)
     if (!(fm.props.mass > 0)) massOk = false
     floors.push({
       id: floor.id,
@@ -120,18 +120,18 @@ export function buildStructure(project: Project): {
   for (const wall of Object.values(project.walls)) {
     if (grouped.has(wall.id)) continue
     const r = buildWallElement(project, wall)
-    issues.push(...r.issues)
+    appendAll(issues, r.issues)
     if (r.element) elements.push(r.element)
   }
   for (const frame of Object.values(project.frameLines)) {
     const r = buildFrameLineElement(project, frame)
-    issues.push(...r.issues)
+    appendAll(issues, r.issues)
     if (r.element) elements.push(r.element)
   }
   for (const column of Object.values(project.columns)) {
     const r = buildColumnElements(project, column)
-    issues.push(...r.issues)
-    elements.push(...r.elements)
+    appendAll(issues, r.issues)
+    appendAll(elements, r.elements)
   }
 
   const n = DOFS_PER_FLOOR * N

@@ -190,6 +190,21 @@ export function eccentricityFraction(
   return { fraction: settings.accidentalEccentricity, source: 'settings' }
 }
 
+/**
+ * Why max/avg cannot be formed on a floor for a load along `direction`: its extreme points have no
+ * width across the load (a single point mass, no slab outline), so "max" and "average" are one value.
+ */
+export function uncheckableReason(floor: FloorProps | undefined, direction: Direction): string | null {
+  if (!floor || floor.extremePoints.length === 0) return 'the floor has no extreme points (no slab outline)'
+  const e = floor.extent
+  const width = direction === 'x' ? e.maxY - e.minY : e.maxX - e.minX
+  const size = Math.max(Math.abs(e.maxX), Math.abs(e.minX), Math.abs(e.maxY), Math.abs(e.minY), 1)
+  if (!(width > 1e-9 * size)) {
+    return `the floor has no plan extent across a load along ${direction} (no slab outline)`
+  }
+  return null
+}
+
 const CASES: readonly { id: StaticCaseId; direction: Direction; sign: 1 | -1 }[] = [
   { id: 'X+e', direction: 'x', sign: 1 },
   { id: 'X-e', direction: 'x', sign: -1 },
@@ -295,7 +310,10 @@ export function runStaticTorsion(
   })
 
   const inputs: TorsionCheckInput[] = cases.flatMap((c) =>
-    c.stories.map((row) => ({ caseId: c.id, row })),
+    c.stories.map((row) => {
+      const why = uncheckableReason(structure.floors[row.index], c.direction)
+      return why ? { caseId: c.id, row, notCheckable: why } : { caseId: c.id, row }
+    }),
   )
   const criterion = buildEvaluation(set, set ? torsionCheckRows(set, inputs) : [])
   return {

@@ -5,7 +5,7 @@
  * to the centre of mass afterwards, so a plan far from O loses no digits.
  * @see docs/mechanics.md §Mass
  */
-import { floorContent } from '@/model'
+import { floorContent, pointsExtent } from '@/model'
 import type { FloorId, Point, Project } from '@/model'
 import type { FloorProps, Issue } from './results'
 
@@ -232,15 +232,12 @@ export function computeFloorMass(
   }
 
   const pts = extremePoints.length > 0 ? extremePoints : fallbackPoints
-  const extent =
-    pts.length > 0
-      ? {
-          minX: Math.min(...pts.map((p) => p.x)),
-          maxX: Math.max(...pts.map((p) => p.x)),
-          minY: Math.min(...pts.map((p) => p.y)),
-          maxY: Math.max(...pts.map((p) => p.y)),
-        }
-      : { minX: centreOfMass.x, maxX: centreOfMass.x, minY: centreOfMass.y, maxY: centreOfMass.y }
+  const extent = pointsExtent(pts) ?? {
+    minX: centreOfMass.x,
+    maxX: centreOfMass.x,
+    minY: centreOfMass.y,
+    maxY: centreOfMass.y,
+  }
 
   return {
     props: {

@@ -29,6 +29,7 @@ export type IssueCode =
   | 'not-applicable'
   /** info: the floor-load centre of rigidity depends on its definition (mixed or discontinuous systems) */
   | 'centre-definition'
+  | 'incomplete'
 
 /** A user-model problem (never an exception). `refs` are ids to highlight (elements, floors). */
 export interface Issue {
@@ -163,7 +164,11 @@ export interface FloorCentres {
 
 // ---------------------------------------------------------------- criteria (loads)
 
-export type Verdict = 'pass' | 'fail' | 'not-applicable'
+/**
+ * 'not-checked': the rule applies but its number could not be computed (no movement at the extreme
+ * points, a floor without plan extent across the load, a missing period); never counted as a pass.
+ */
+export type Verdict = 'pass' | 'fail' | 'not-applicable' | 'not-checked'
 
 /** One check row of a criterion set. */
 export interface CheckRow {
@@ -431,7 +436,12 @@ export interface TimeHistoryResult {
 
 // ---------------------------------------------------------------- whole analysis
 
-export type AnalysisStatus = 'ok' | 'invalid' | 'mechanism'
+/**
+ * 'ok': every requested section computed. 'incomplete': the structure was analysed but modes, base
+ * shears or verdicts are missing (an 'incomplete' issue says which and why). 'mechanism', 'invalid':
+ * see docs/results-format.md.
+ */
+export type AnalysisStatus = 'ok' | 'incomplete' | 'invalid' | 'mechanism'
 
 /** Options of `analyzeProject`. */
 export interface AnalysisOptions {

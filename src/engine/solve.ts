@@ -9,6 +9,7 @@
  * removes the digits lost when the plan lies far from O.
  * @see docs/mechanics.md §Factorization and mechanisms
  */
+import { NEAR_MECHANISM_RATIO, SOFT_DIRECTION_RATIO, floorConditioning } from './conditioning'
 import type { Issue, Structure } from './results'
 
 /** Solves K u = f for one factorization of K; floor flexibility blocks F_j (3x3 of K^-1). */
@@ -25,12 +26,18 @@ export interface StiffnessSolver {
   floorFlexibilities?(): Float64Array
   /** Smallest pivot of the factorization relative to its original diagonal (1 = uncoupled). */
   readonly minPivotRatio?: number
+  /**
+   * Smallest over the floors of the weakest-to-strongest stiffness ratio of a floor (conditioning.ts;
+   * 1 = equally stiff in every direction). Only on solvers from createStiffnessSolver.
+   */
+  readonly minFloorStiffnessRatio?: number
 }
 
 /** The solver createStiffnessSolver returns: every optional member of StiffnessSolver present. */
 export interface FactoredStiffness extends StiffnessSolver {
   floorFlexibilities(): Float64Array
   readonly minPivotRatio: number
+  readonly minFloorStiffnessRatio: number
 }
 
 /** Thresholds of the pivot test (relative to the DOF's own scaled diagonal). */
@@ -39,6 +46,10 @@ export interface SolverOptions {
   readonly mechanismTolerance?: number
   /** A pivot below this fraction (but above the mechanism one) gives an 'ill-conditioned' warning (default 1e-9). */
   readonly warningTolerance?: number
+  /** A floor stiffness ratio below this is a mechanism (default NEAR_MECHANISM_RATIO, 1e-8). */
+  readonly nearMechanismRatio?: number
+  /** A floor stiffness ratio below this gives an 'ill-conditioned' warning (default SOFT_DIRECTION_RATIO, 1e-3). */
+  readonly softDirectionRatio?: number
 }
 
 /** Most issues reported individually before the rest are summed up. */
@@ -169,6 +180,7 @@ export function createStiffnessSolver(
 
   const L = A
   const blocks = new Float64Array(9 * N)
+  const scaledBlocks = new Float64Array(9 * N)
   const haveBlock = new Uint8Array(N)
   let allBlocks = false
   const w0 = new Float64Array(n)
@@ -177,12 +189,45 @@ export function createStiffnessSolver(
 
   const computeBlock = (j: number): void => {
     const Fv = scaledFlexibilityBlock(L, n, j, w0, w1, w2)
+    scaledBlocks.set(Fv, 9 * j)
     toOriginBlock(Fv, xm[j]!, ym[j]!, len[j]!, blocks, 9 * j)
     haveBlock[j] = 1
   }
 
+  const ensureAllBlocks = (): void => {
+    if (allBlocks) return
+    for (let j = 0; j < N; j++) if (!haveBlock[j]) computeBlock(j)
+    allBlocks = true
+  }
+  // Near-mechanisms the pivots cannot see: a direction of one floor that is independent of the others
+  // (pivot ratio near 1) but held by almost nothing. Needs every floor block, which the centres of
+  // rigidity need anyway (cached).
+  ensureAllBlocks()
+  const conditioning = floorConditioning(scaledBlocks, N)
+  let weakest = conditioning[0]
+  for (const c of conditioning) if (weakest && c.ratio < weakest.ratio) weakest = c
+  const nearTol = options.nearMechanismRatio ?? NEAR_MECHANISM_RATIO
+  const softTol = options.softDirectionRatio ?? SOFT_DIRECTION_RATIO
+  if (weakest && weakest.ratio < softTol) {
+    const near = weakest.ratio < nearTol
+    const failing = near ? conditioning.filter((c) => c.ratio < nearTol) : [weakest]
+    const found = describeMechanisms(
+      structure,
+      failing.map((c) => ({ dof: 3 * c.floor, shape: floorShape(n, c.floor, c.weakShape) })),
+      xm,
+      ym,
+      len,
+      near ? 'mechanism' : 'ill-conditioned',
+      near ? 'practically no resistance' : 'almost no resistance',
+    ).map((i) => ({ ...i, message: `${i.message} ${ratioWords(weakest.ratio)}` }))
+    if (near) return { ok: false, issues: found }
+    // One warning is enough: the pivot test above already named a weak shape.
+    if (issues.length === 0) issues.push(...found)
+  }
+
   const solver: FactoredStiffness = {
     minPivotRatio: Number.isFinite(minRatio) ? minRatio : 1,
+    minFloorStiffnessRatio: weakest ? weakest.ratio : 1,
     solve(rhs: Float64Array): Float64Array {
       if (rhs.length !== n) throw new RangeError(`[engine] solve: rhs has ${rhs.length} terms, expected ${n}`)
       // g = B' f
@@ -225,14 +270,25 @@ export function createStiffnessSolver(
       return blocks.slice(9 * floorIndex, 9 * floorIndex + 9)
     },
     floorFlexibilities(): Float64Array {
-      if (!allBlocks) {
-        for (let j = 0; j < N; j++) if (!haveBlock[j]) computeBlock(j)
-        allBlocks = true
-      }
+      ensureAllBlocks()
       return blocks
     },
   }
   return { ok: true, solver, issues }
+}
+
+/** A 3N shape that moves floor j only, by (t_x, t_y, psi) in scaled coordinates. */
+function floorShape(n: number, j: number, s: readonly [number, number, number]): Float64Array {
+  const z = new Float64Array(n)
+  z[3 * j] = s[0]
+  z[3 * j + 1] = s[1]
+  z[3 * j + 2] = s[2]
+  return z
+}
+
+/** "(weakest stiffness 2.0e-11 of the strongest at that floor)". */
+function ratioWords(ratio: number): string {
+  return `(its weakest stiffness is ${ratio.toExponential(1)} of its strongest; see docs/mechanics.md §7)`
 }
 
 /** Length that scales a floor's rotation: l_s, else half the plan diagonal, at least 1 m. */
@@ -464,6 +520,7 @@ function describeMechanisms(
   ym: Float64Array,
   len: Float64Array,
   code: 'mechanism' | 'ill-conditioned',
+  resistanceWords?: string,
 ): Issue[] {
   const N = structure.floorCount
   const findings: Finding[] = []
@@ -506,6 +563,13 @@ function describeMechanisms(
       const dir = directionWords(tx / trans, ty / trans)
       finding.directionKey = dir.key
       finding.freeWords = `along ${dir.words}`
+      // Name the few elements that act noticeably along the free direction (a near-mechanism).
+      const along = [...new Set(
+        supporting.filter((e) => Math.abs(e.map[0] * tx + e.map[1] * ty) > 0.1 * trans).map((e) => e.id),
+      )]
+      if (along.length > 0 && along.length <= 3) {
+        finding.reasonWords = `only ${along.join(', ')} ${along.length === 1 ? 'acts' : 'act'} along ${dir.words}`
+      }
     } else {
       // The point that does not move: CM + (-t_y, t_x)/theta.
       const px = xm[best]! - ty / theta
@@ -560,8 +624,9 @@ function describeMechanisms(
   const issues: Issue[] = []
   const severity = code === 'mechanism' ? 'error' : 'warning'
   const lead = code === 'mechanism' ? '[engine] mechanism:' : '[engine] nearly a mechanism (ill-conditioned stiffness):'
-  const has = code === 'mechanism' ? 'has no resistance' : 'has almost no resistance'
-  const have = code === 'mechanism' ? 'have no resistance' : 'have almost no resistance'
+  const what = resistanceWords ?? (code === 'mechanism' ? 'no resistance' : 'almost no resistance')
+  const has = `has ${what}`
+  const have = `have ${what}`
   for (const list of groups.values()) {
     list.sort((a, b) => a.floor - b.floor)
     const first = list[0]!

@@ -93,3 +93,13 @@ export type {
   SeismicReadMessages,
   SeismicSystemPreset,
 } from './seismicDesign'
+export {
+  POLYGON_TOLERANCE,
+  openingProblems,
+  polygonSignedArea,
+  simplePolygonProblem,
+  slabPolygonProblems,
+} from './polygons'
+export type { PolygonProblem } from './polygons'
+export { appendAll, maxOf, minOf, pointsExtent } from './arrays'
+export { INPUT_BUDGET, checkDocumentBudget, checkFileSizeBudget, checkTextBudget } from './budget'

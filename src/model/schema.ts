@@ -5,6 +5,8 @@
  * `walls.w12.thickness: must be > 0, got -0.2`.
  * @see ../../docs/file-format.md for every field, unit, range and default.
  */
+import { INPUT_BUDGET, checkDocumentBudget, checkTextBudget } from './budget'
+import { findEdgePair, openingProblems } from './polygons'
 import type { FloorId } from './ids'
 import { migrateDocument } from './migrations'
 import { STIFFNESS_FACTOR_DEFAULTS } from './stiffnessFactors'
@@ -53,7 +55,7 @@ export const LIMITS = {
   coordinate: 1e4,
   storyHeightMin: 0.1,
   storyHeightMax: 200,
-  floorsMax: 300,
+  floorsMax: INPUT_BUDGET.floors,
   thicknessMin: 0.001,
   thicknessMax: 10,
   modulusMin: 1e6,
@@ -76,11 +78,11 @@ export const LIMITS = {
   massPerLengthMax: 1e6,
   pointMassMax: 1e9,
   polarInertiaMax: 1e13,
-  verticesMax: 10000,
+  verticesMax: INPUT_BUDGET.verticesPerPolygon,
   spectrumMax: 20,
   periodMax: 100,
   baseShearMax: 1e12,
-  recordSamplesMax: 200000,
+  recordSamplesMax: INPUT_BUDGET.groundMotionSamples,
   recordDtMin: 1e-4,
   recordDtMax: 1,
   groundAccelerationMax: 1000,
@@ -298,24 +300,6 @@ function segmentsTouch(a: Point, b: Point, c: Point, d: Point): boolean {
   )
 }
 
-/** Point in polygon, points on the boundary count as inside (tolerance relative to the extent). */
-function insideOrOn(pts: readonly Point[], p: Point, tol: number): boolean {
-  let inside = false
-  for (let i = 0, j = pts.length - 1; i < pts.length; j = i++) {
-    const a = pts[i] as Point
-    const b = pts[j] as Point
-    const dx = b.x - a.x
-    const dy = b.y - a.y
-    const len2 = dx * dx + dy * dy
-    const t = len2 > 0 ? Math.max(0, Math.min(1, ((p.x - a.x) * dx + (p.y - a.y) * dy) / len2)) : 0
-    if (Math.hypot(p.x - (a.x + t * dx), p.y - (a.y + t * dy)) <= tol) return true
-    if (a.y > p.y !== b.y > p.y && p.x < ((b.x - a.x) * (p.y - a.y)) / (b.y - a.y) + a.x) {
-      inside = !inside
-    }
-  }
-  return inside
-}
-
 function polygon(ctx: Ctx, path: string, v: unknown): Point[] | undefined {
   const raw = list(ctx, path, v)
   if (!raw) return undefined
@@ -356,22 +340,19 @@ function polygon(ctx: Ctx, path: string, v: unknown): Point[] | undefined {
   if (!(Math.abs(signedArea(pts)) > 1e-9 * Math.max(1, span * span))) {
     return fail(ctx, path, 'must enclose a non-zero area (the vertices are in one line)')
   }
-  for (let i = 0; i < n; i++) {
-    for (let j = i + 1; j < n; j++) {
-      // Adjacent edges share a vertex by construction; skip them (and the wrap-around pair).
-      if (j === i + 1 || (i === 0 && j === n - 1)) continue
-      const a = pts[i] as Point
-      const b = pts[(i + 1) % n] as Point
-      const c = pts[j] as Point
-      const d = pts[(j + 1) % n] as Point
-      if (segmentsTouch(a, b, c, d)) {
-        return fail(
-          ctx,
-          path,
-          `edges ${i}-${(i + 1) % n} and ${j}-${(j + 1) % n} cross or touch (an outline must not cross itself)`,
-        )
-      }
-    }
+  // Exact predicates on the input; candidate pairs from the x sweep (bounding boxes overlap).
+  const pair = findEdgePair(pts, 0, (i, j) => {
+    // Adjacent edges share a vertex by construction; skip them (and the wrap-around pair).
+    if (j === i + 1 || (i === 0 && j === n - 1)) return false
+    return segmentsTouch(pts[i] as Point, pts[(i + 1) % n] as Point, pts[j] as Point, pts[(j + 1) % n] as Point)
+  })
+  if (pair) {
+    const [i, j] = pair
+    return fail(
+      ctx,
+      path,
+      `edges ${i}-${(i + 1) % n} and ${j}-${(j + 1) % n} cross or touch (an outline must not cross itself)`,
+    )
   }
   return pts
 }
@@ -597,22 +578,15 @@ function readSlab(ctx: Ctx, p: string, id: string, o: Record<string, unknown>, r
       openingsOk = false
       return
     }
-    if (outline) {
-      const span = Math.max(...outline.map((q) => Math.abs(q.x)), ...outline.map((q) => Math.abs(q.y)), 1)
-      const outside = hole.findIndex((q) => !insideOrOn(outline, q, 1e-9 * span))
-      if (outside >= 0) {
-        const q = hole[outside] as Point
-        fail(
-          ctx,
-          at(key(p, 'openings'), i),
-          `must lie inside the outline (vertex ${outside} at (${q.x}, ${q.y}) is outside)`,
-        )
-        openingsOk = false
-        return
-      }
-    }
     openings.push(hole)
   })
+  if (outline && openingsOk) {
+    // Inside the outline, not crossing it, not overlapping, nesting in or crossing each other (polygons.ts).
+    for (const problem of openingProblems(outline, openings)) {
+      fail(ctx, `${p}.${problem.path}`, problem.message)
+      openingsOk = false
+    }
+  }
   if (outline && openingsOk) {
     const net = Math.abs(signedArea(outline)) - openings.reduce((s, h) => s + Math.abs(signedArea(h)), 0)
     if (!(net > 1e-9 * Math.abs(signedArea(outline)))) {
@@ -1359,6 +1333,9 @@ export function parseProject(input: unknown): ParseResult {
       errors: [`version ${version} is newer than this Gyre (reads up to ${CURRENT_VERSION}): update Gyre`],
     }
   }
+  // Size first, on counts only: an absurd file is refused before any per-field work.
+  const overBudget = checkDocumentBudget(input)
+  if (overBudget.length > 0) return { ok: false, errors: overBudget }
   const migrated = migrateDocument(input, CURRENT_VERSION)
   if (!migrated.ok) return { ok: false, errors: migrated.errors }
   const ctx: Ctx = { errors: [], warnings: [] }
@@ -1372,6 +1349,8 @@ export function parseProject(input: unknown): ParseResult {
 
 /** Parse the text of a project file (JSON), then as `parseProject`. Never throws. */
 export function parseProjectText(text: string): ParseResult {
+  const tooLong = checkTextBudget(text.length)
+  if (tooLong) return { ok: false, errors: [tooLong] }
   let data: unknown
   try {
     data = JSON.parse(text)

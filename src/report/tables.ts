@@ -57,14 +57,14 @@ export const TABLE_IDS = [
 
 export type TableId = (typeof TABLE_IDS)[number]
 
-/** Display text of a verdict: 'pass', 'fail' or 'n/a'. */
+/** Display text of a verdict: 'pass', 'fail', 'not checked' or 'n/a'. */
 export function verdictText(verdict: Verdict): string {
-  return verdict === 'not-applicable' ? 'n/a' : verdict
+  return verdict === 'not-applicable' ? 'n/a' : verdict === 'not-checked' ? 'not checked' : verdict
 }
 
-const VERDICT_RANK: Record<Verdict, number> = { fail: 2, pass: 1, 'not-applicable': 0 }
+const VERDICT_RANK: Record<Verdict, number> = { fail: 3, 'not-checked': 2, pass: 1, 'not-applicable': 0 }
 
-/** The governing verdict of some rows: fail over pass over n/a; null when there are no rows. */
+/** The governing verdict of some rows: fail over not checked over pass over n/a; null when there are no rows. */
 export function worstVerdict(rows: readonly CheckRow[]): CheckRow | null {
   let pick: CheckRow | null = null
   for (const r of rows) if (!pick || VERDICT_RANK[r.verdict] > VERDICT_RANK[pick.verdict]) pick = r

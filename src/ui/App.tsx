@@ -48,7 +48,7 @@ import { PlanCanvas } from './PlanCanvas'
 import type { PlanHandle, PlanPointerEvent, PlanPreview } from './PlanCanvas'
 import { planScene, sceneBounds } from './planScene'
 import { ProblemsPanel } from './ProblemsPanel'
-import { downloadProject, readProjectText } from './projectFile'
+import { downloadProject, readProjectFile } from './projectFile'
 import { formatQuantity, fromDisplay } from './quantities'
 import { ResultsPanel } from './ResultsPanel'
 import { SaveNotice } from './SaveNotice'
@@ -217,8 +217,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial, auto
     const file = e.target.files?.[0]
     e.target.value = ''
     if (!file) return
-    const text = await file.text()
-    const read = readProjectText(text, file.name)
+    const read = await readProjectFile(file)
     if (!read.ok) {
       setBanner({ kind: 'error', title: `[file] ${file.name} was not opened; your current model is unchanged.`, lines: read.errors })
       return

@@ -7,7 +7,7 @@
 import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react'
 import type { PointerEvent as ReactPointerEvent, ReactNode, WheelEvent as ReactWheelEvent } from 'react'
 import { describeWallGroups } from '@/engine'
-import { CAUTION_SHORT } from '@/model'
+import { CAUTION_SHORT, maxOf, minOf } from '@/model'
 import type { Point, Project, UnitSystem } from '@/model'
 import type { FloorOverlay } from './floorOverlay'
 import type { PlanScene } from './planScene'
@@ -266,10 +266,10 @@ export function PlanCanvas(props: Props) {
   if (grid) {
     const ys = grid.y.map((g) => g.at)
     const xs = grid.x.map((g) => g.at)
-    const yMin = Math.min(...ys, bounds?.minY ?? 0) - 2
-    const yMax = Math.max(...ys, bounds?.maxY ?? 0) + 2
-    const xMin = Math.min(...xs, bounds?.minX ?? 0) - 2
-    const xMax = Math.max(...xs, bounds?.maxX ?? 0) + 2
+    const yMin = minOf(ys, bounds?.minY ?? 0) - 2
+    const yMax = maxOf(ys, bounds?.maxY ?? 0) + 2
+    const xMin = minOf(xs, bounds?.minX ?? 0) - 2
+    const xMax = maxOf(xs, bounds?.maxX ?? 0) + 2
     grid.x.forEach((g) => {
       const a = S({ x: g.at, y: yMin })
       const b = S({ x: g.at, y: yMax })

@@ -31,7 +31,8 @@ export function StatusLine({ analysis, message, autosavedAt, autosaveProblem = n
         : state === 'stale'
         ? 'Analysis updating…'
         : state === 'current'
-          ? `Analysis current (rev ${analysis.resultRevision ?? '-'}, ${analysis.lastWorkerMs?.toFixed(0) ?? '-'} ms${analysis.inWorker ? '' : ', main thread'})`
+          ? `Analysis current (rev ${analysis.resultRevision ?? '-'}, ${analysis.lastWorkerMs?.toFixed(0) ?? '-'} ms${analysis.inWorker ? '' : ', main thread'})` +
+            (analysis.result && analysis.result.status !== 'ok' ? ` — ${analysis.result.status}, see Problems` : '')
           : 'Analysis waiting'
   return (
     <footer className="status" data-testid="status-line">

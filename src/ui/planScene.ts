@@ -1,5 +1,5 @@
 /** Pure: which records of a project are drawn on the plan of one floor. */
-import { elementFloorRange, floorContent, floorIndex } from '@/model'
+import { appendAll, elementFloorRange, floorContent, floorIndex } from '@/model'
 import type { Column, FloorId, FrameLine, LineMass, Point, PointMass, Project, Slab, Wall } from '@/model'
 import { boundsOf } from './planView'
 import type { Box } from './planView'
@@ -42,12 +42,12 @@ export function planScene(project: Project, floorId: FloorId): PlanScene {
 /** Everything drawn on the floor plus the grid, for "fit". */
 export function sceneBounds(project: Project, scene: PlanScene): Box | null {
   const pts: Point[] = []
-  for (const s of scene.slabs) pts.push(...s.outline)
+  for (const s of scene.slabs) appendAll(pts, s.outline)
   for (const w of scene.walls) pts.push(w.p1, w.p2)
   for (const f of scene.frameLines) pts.push(f.p1, f.p2)
   for (const c of scene.columns) pts.push(c.at)
   for (const m of scene.pointMasses) pts.push(m.at)
-  for (const m of scene.lineMasses) pts.push(...m.points)
+  for (const m of scene.lineMasses) appendAll(pts, m.points)
   if (pts.length === 0 && project.grid) {
     for (const gx of project.grid.x) for (const gy of project.grid.y) pts.push({ x: gx.at, y: gy.at })
   }

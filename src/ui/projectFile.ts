@@ -1,5 +1,5 @@
 /** Reading and writing the project file at the browser edge. */
-import { parseProject, serializeProject } from '@/model'
+import { checkFileSizeBudget, checkTextBudget, parseProject, serializeProject } from '@/model'
 import type { Project } from '@/model'
 import { downloadBlob } from '@/viewer'
 
@@ -9,6 +9,8 @@ export type OpenResult =
 
 /** Parse file text into a validated project, or the readable list of what is wrong with it. */
 export function readProjectText(text: string, fileName = 'file'): OpenResult {
+  const tooLong = checkTextBudget(text.length)
+  if (tooLong) return { ok: false, errors: [`[file] ${fileName}: ${tooLong}`] }
   let json: unknown
   try {
     json = JSON.parse(text)
@@ -24,6 +26,20 @@ export function readProjectText(text: string, fileName = 'file'): OpenResult {
     const why = err instanceof Error ? err.message : String(err)
     return { ok: false, errors: [why.startsWith('[') ? why : `[file] ${why}`] }
   }
+}
+
+/**
+ * Open a chosen file: its byte size is checked against the input budget before a byte is read, so a
+ * huge file is refused at once and never held in memory.
+ */
+export async function readProjectFile(file: {
+  readonly name: string
+  readonly size: number
+  text(): Promise<string>
+}): Promise<OpenResult> {
+  const tooBig = checkFileSizeBudget(file.size)
+  if (tooBig) return { ok: false, errors: [`[file] ${file.name}: ${tooBig}`] }
+  return readProjectText(await file.text(), file.name)
 }
 
 /** The saved file's text: the document as it is (SI units), pretty-printed. */

@@ -3,6 +3,7 @@
  * the shown mode (or over the record for a response), the turn centre, CM and CR, and the live
  * outline (moved by the frame loop through a ref, never through React state).
  */
+import { pointsExtent } from '@/model'
 import { useEffect, useMemo, useRef } from 'react'
 import type { RefObject } from 'react'
 import { useStore } from 'zustand'
@@ -73,10 +74,7 @@ export function PlanTrace(props: Props) {
       }
     }
     const all = [...floor.corners, ...paths.flat()]
-    const minX = Math.min(...all.map((p) => p.x))
-    const maxX = Math.max(...all.map((p) => p.x))
-    const minY = Math.min(...all.map((p) => p.y))
-    const maxY = Math.max(...all.map((p) => p.y))
+    const { minX, maxX, minY, maxY } = pointsExtent(all) ?? { minX: 0, maxX: 0, minY: 0, maxY: 0 }
     const span = Math.max(maxX - minX, maxY - minY, 1e-6)
     const k = (SIZE - 24) / span
     const ox = (SIZE - (maxX - minX) * k) / 2

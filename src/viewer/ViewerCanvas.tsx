@@ -3,6 +3,7 @@
  * driver, camera presets with orbit controls, and a render step that can hand each finished frame to
  * an exporter. Frame loop 'demand': frames are drawn only while something moves or changes.
  */
+import { appendAll } from '@/model'
 import { useEffect, useMemo, useRef, useState } from 'react'
 import type { RefObject } from 'react'
 import { Canvas, useFrame, useThree } from '@react-three/fiber'
@@ -78,7 +79,7 @@ function buildShared(layout: BuildingLayout): SharedResources {
       }
     }
   }
-  ghostPositions.push(...layout.frames.positions)
+  appendAll(ghostPositions, layout.frames.positions)
   const ghostMembers = new THREE.BufferGeometry()
   ghostMembers.setAttribute('position', new THREE.Float32BufferAttribute(ghostPositions, 3))
   return {

@@ -4,7 +4,7 @@
  * "attached" to the floor it moves with (-1 = the fixed base), so the frame loop can displace it with
  * that floor's rigid motion. No three.js here.
  */
-import { computeElevations, elementFloorRange, floorContent } from '@/model'
+import { computeElevations, elementFloorRange, floorContent, pointsExtent } from '@/model'
 import type { Point, Project } from '@/model'
 import type { RigidTransform } from './modeAnimation'
 
@@ -268,14 +268,7 @@ export function layoutBuilding(project: Project): BuildingLayout {
     ...Object.values(project.columns).map((c) => c.at),
     ...Object.values(project.frameLines).flatMap((f) => [f.p1, f.p2]),
   ]
-  const box = all.length
-    ? {
-        minX: Math.min(...all.map((p) => p.x)),
-        maxX: Math.max(...all.map((p) => p.x)),
-        minY: Math.min(...all.map((p) => p.y)),
-        maxY: Math.max(...all.map((p) => p.y)),
-      }
-    : { minX: 0, maxX: 1, minY: 0, maxY: 1 }
+  const box = pointsExtent(all) ?? { minX: 0, maxX: 1, minY: 0, maxY: 1 }
   return {
     floors,
     walls: buildPrisms(wallPrisms),

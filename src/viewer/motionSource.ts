@@ -3,6 +3,7 @@
  * history), the unit scale that makes its largest floor displacement equal the plan size (the
  * amplitude control multiplies it), the colour measures, and the mode table rows.
  */
+import { maxOf } from '@/model'
 import type { AnalysisResult, ModalResult, ModeCharacter, TimeHistoryResult } from '@/engine'
 import type { Point } from '@/model'
 import type { BuildingLayout } from './buildingLayout'
@@ -117,8 +118,8 @@ function measures(
   return {
     displacement: normalizeToMax(raw.displacement),
     driftRatio: normalizeToMax(raw.driftRatio),
-    maxDisplacement: Math.max(0, ...raw.displacement),
-    maxDriftRatio: Math.max(0, ...raw.driftRatio),
+    maxDisplacement: maxOf(raw.displacement, 0),
+    maxDriftRatio: maxOf(raw.driftRatio, 0),
   }
 }
 

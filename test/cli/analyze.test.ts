@@ -2,7 +2,7 @@ import { spawnSync } from 'node:child_process'
 import { readFileSync } from 'node:fs'
 import { fileURLToPath } from 'node:url'
 import { describe, expect, it } from 'vitest'
-import { EXIT_INVALID, EXIT_MECHANISM, EXIT_OK, runCli } from '@/cli/analyze'
+import { EXIT_INCOMPLETE, EXIT_INVALID, EXIT_MECHANISM, EXIT_OK, runCli } from '@/cli/analyze'
 import type { CliIo } from '@/cli/analyze'
 import { BUILT_IN_CRITERION_SETS } from '@/engine'
 import { CAUTION } from '@/model'
@@ -173,6 +173,53 @@ describe('runCli', () => {
     expect(c.torsionalRadius.y).toBeCloseTo(Math.sqrt(Ktheta / 300e6), 6)
     expect(Array.isArray(result.modes.periods)).toBe(true)
     expect(result.modes.periods).toHaveLength(3)
+  })
+})
+
+describe('runCli on an incomplete analysis', () => {
+  const pointMassOnly = JSON.stringify({
+    format: 'gyre-project',
+    version: 1,
+    name: 'Point mass only',
+    floors: [{ id: 'F1', height: 3.5 }],
+    pointMasses: { m1: { floor: 'F1', at: { x: 5, y: 3 }, mass: 20000 } },
+    frameLines: {
+      w: { p1: { x: 0, y: 0 }, p2: { x: 0, y: 6 }, stiffness: { kind: 'direct', storyStiffness: 2e8 }, top: 'F1' },
+      e: { p1: { x: 10, y: 0 }, p2: { x: 10, y: 6 }, stiffness: { kind: 'direct', storyStiffness: 1e8 }, top: 'F1' },
+      s: { p1: { x: 0, y: 0 }, p2: { x: 10, y: 0 }, stiffness: { kind: 'direct', storyStiffness: 1e8 }, top: 'F1' },
+    },
+    settings: { spectrum: { kind: 'asce7', SDS: 1, SD1: 0.6, TL: 8 } },
+  })
+
+  it('exits 4 with the reason on stderr and no PASS when the only mass has no polar inertia (was: exit 0, PASS)', () => {
+    const r = run(['pm.json'], { 'pm.json': pointMassOnly })
+    expect(EXIT_INCOMPLETE).toBe(4)
+    expect(r.code).toBe(EXIT_INCOMPLETE)
+    expect(r.out).toContain('Status: incomplete')
+    expect(r.out).not.toContain('PASS')
+    expect(r.out).toContain(CAUTION)
+    expect(r.err).toContain('the analysis is incomplete')
+    expect(r.err).toMatch(/error incomplete: .*give the point mass a polar inertia or add a slab/)
+  })
+})
+
+describe('runCli on a file over the byte budget', () => {
+  it('exits 1 after a stat, without reading the file', () => {
+    let read = false
+    let err = ''
+    const io: CliIo = {
+      out: () => undefined,
+      err: (t) => (err += t),
+      readFile: () => {
+        read = true
+        return '{}'
+      },
+      fileSize: () => 100 * 1024 * 1024,
+      writeFile: () => undefined,
+    }
+    expect(runCli(['huge.json'], io)).toBe(EXIT_INVALID)
+    expect(read).toBe(false)
+    expect(err).toBe('[file] huge.json: 104857600 bytes is more than the budget of 67108864 bytes (64 MiB; docs/file-format.md, Limits)\n')
   })
 })
 

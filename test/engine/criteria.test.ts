@@ -7,6 +7,7 @@ import {
   BUILT_IN_CRITERION_SETS,
   amplificationFactor,
   evaluateRegularity,
+  overallVerdict,
   resolveCriterionSet,
   scopeLine,
   torsionCheckRows,
@@ -205,14 +206,27 @@ describe('evaluateRegularity', () => {
 })
 
 describe('torsionCheckRows without movement', () => {
-  it('marks a story with no drift at the extreme points as not applicable', () => {
+  it('marks a story with no drift at the extreme points as not checked, never pass (was: not applicable, overall PASS)', () => {
     const set = resolveCriterionSet(settings()).set!
     const still: StoryTorsionRow = { ...row(1), driftMax: 0, driftAvg: 0, driftRatio: 1 }
-    const rows = torsionCheckRows(set, [{ caseId: 'X+e', row: still }])
+    const moving: StoryTorsionRow = { ...row(1), floorId: 'L2', index: 1 }
+    const rows = torsionCheckRows(set, [{ caseId: 'X+e', row: still }, { caseId: 'X+e', row: moving }])
     // common practice: a ratio of two zero drifts carries no information
-    expect(rows.filter((w) => w.comparison).map((w) => w.verdict)).toEqual([
-      'not-applicable',
-      'not-applicable',
+    expect(rows.filter((w) => w.comparison && w.floorId === 'F1').map((w) => w.verdict)).toEqual([
+      'not-checked',
+      'not-checked',
+    ])
+    // the other story passes ASCE/SEI 7-16 Table 12.3-1 Type 1a (ratio 1 <= 1.2), but a partial pass is not a pass
+    expect(rows.some((w) => w.floorId === 'L2' && w.verdict === 'pass')).toBe(true)
+    expect(overallVerdict(rows)).toBe('not-checked')
+  })
+
+  it('marks a story the loads module flags as not checkable as not checked, with the reason as label', () => {
+    const set = resolveCriterionSet(settings()).set!
+    const rows = torsionCheckRows(set, [{ caseId: 'Y-e', row: row(1), notCheckable: 'no plan extent' }])
+    expect(rows.filter((w) => w.comparison).map((w) => [w.verdict, w.label])).toEqual([
+      ['not-checked', 'not checked: no plan extent'],
+      ['not-checked', 'not checked: no plan extent'],
     ])
   })
 })

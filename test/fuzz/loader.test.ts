@@ -237,7 +237,7 @@ function checkRefusal(errors: readonly string[]): void {
 
 function checkResult(result: AnalysisResult): void {
   expect(result.caution).toBe(CAUTION)
-  expect(['ok', 'invalid', 'mechanism']).toContain(result.status)
+  expect(['ok', 'incomplete', 'invalid', 'mechanism']).toContain(result.status)
   const bad = nonFinite({ ...result, timings: {} })
   expect(bad, `non-finite numbers (status ${result.status})`).toEqual([])
   if (result.status !== 'ok') {
@@ -248,6 +248,24 @@ function checkResult(result: AnalysisResult): void {
     expect(result.modes).not.toBeNull()
     const periods = Array.from(result.modes?.periods ?? [])
     for (const T of periods) expect(T).toBeGreaterThan(0)
+    // status ok means nothing is missing: at least one mode, positive base shears both ways,
+    // no criterion row left unchecked, no 'incomplete' issue (docs/results-format.md, Status values)
+    expect(result.modes!.count, 'status ok with no mode').toBeGreaterThan(0)
+    expect(result.torsion, 'status ok without the torsion check').not.toBeNull()
+    expect(result.torsion!.baseShear.x).toBeGreaterThan(0)
+    expect(result.torsion!.baseShear.y).toBeGreaterThan(0)
+    if (result.spectrum) {
+      expect(result.spectrum.baseShear.x.cqc, 'status ok with no spectrum base shear along x').toBeGreaterThan(0)
+      expect(result.spectrum.baseShear.y.cqc, 'status ok with no spectrum base shear along y').toBeGreaterThan(0)
+    }
+    for (const e of [result.torsion!.criterion, result.regularity]) {
+      if (e) expect(e.rows.filter((row) => row.verdict === 'not-checked')).toEqual([])
+    }
+    expect(result.issues.filter((i) => i.code === 'incomplete')).toEqual([])
+  }
+  // whatever the status, a PASS never stands on an unchecked row
+  for (const e of [result.torsion?.criterion, result.regularity]) {
+    if (e?.overall === 'pass') expect(e.rows.some((row) => row.verdict === 'not-checked')).toBe(false)
   }
 }
 
@@ -330,6 +348,33 @@ describe('analyzeProject on accepted fuzzed models', () => {
         checkResult(analyzeProject(r.project, { timeHistory: true }))
       }),
       { numRuns: Math.max(10, Math.ceil(ENGINE_RUNS / 30)), seed: SEED + 4 },
+    )
+  }, ENGINE_TIMEOUT)
+
+  it('never says ok with nothing computed on floors of point masses with or without polar inertia', () => {
+    const pm = fc.record({
+      x: fc.double({ min: -5, max: 15, noNaN: true }),
+      y: fc.double({ min: -5, max: 10, noNaN: true }),
+      mass: fc.double({ min: 100, max: 1e6, noNaN: true }),
+      J: fc.oneof(fc.constant(undefined), fc.double({ min: 1, max: 1e8, noNaN: true })),
+    })
+    fc.assert(
+      fc.property(fc.array(pm, { minLength: 1, maxLength: 3 }), (masses) => {
+        const doc = clone(box) as { [k: string]: Json }
+        doc.slabs = {}
+        doc.pointMasses = Object.fromEntries(
+          masses.map((m, i) => [
+            `m${i}`,
+            { floor: 'F1', at: { x: m.x, y: m.y }, mass: m.mass, ...(m.J !== undefined ? { polarInertia: m.J } : {}) },
+          ]),
+        )
+        const r = parseProject(doc)
+        if (!r.ok) return
+        const result = analyzeProject(r.project)
+        checkResult(result)
+        if ((result.modes?.count ?? 0) === 0) expect(result.status).not.toBe('ok')
+      }),
+      { numRuns: Math.max(50, Math.ceil(ENGINE_RUNS / 3)), seed: SEED + 5 },
     )
   }, ENGINE_TIMEOUT)
 

@@ -10,6 +10,7 @@ import {
   serializeProject,
 } from '@/model/schema'
 import type { Project } from '@/model'
+import { analyzeProject } from '@/engine'
 
 type Json = Record<string, unknown>
 
@@ -223,6 +224,63 @@ describe('parseProject', () => {
     expect(errorsOf(full)).toEqual([
       'slabs.deck.openings: cover the whole outline (openings must not overlap each other)',
     ])
+  })
+
+  it('refuses overlapping, nested, crossing and outline-crossing openings with path-naming messages (was: accepted, wrong mass)', () => {
+    const r = (x0: number, y0: number, x1: number, y1: number) => [
+      { x: x0, y: y0 },
+      { x: x1, y: y0 },
+      { x: x1, y: y1 },
+      { x: x0, y: y1 },
+    ]
+    const withOpenings = (openings: unknown, outline?: unknown): Json => {
+      const doc = copy(box)
+      setPath(doc, 'slabs.deck.openings', openings)
+      if (outline) setPath(doc, 'slabs.deck.outline', outline)
+      return doc
+    }
+    expect(errorsOf(withOpenings([r(1, 1, 4, 4), r(3, 2, 6, 5)]))).toEqual([
+      'slabs.deck.openings[1]: overlaps openings[0] (its edge 0-1 crosses edge 1-2 of openings[0]; openings must not overlap each other)',
+    ])
+    expect(errorsOf(withOpenings([r(1, 1, 4, 4), r(2, 2, 3, 3)]))).toEqual([
+      'slabs.deck.openings[1]: lies inside openings[0] (openings must not overlap each other)',
+    ])
+    expect(errorsOf(withOpenings([r(1, 2, 9, 3), r(4, 1, 5, 5)]))[0]).toMatch(/^slabs\.deck\.openings\[1\]: overlaps openings\[0\]/)
+    expect(errorsOf(withOpenings([[{ x: 1, y: 1 }, { x: 3, y: 3 }, { x: 3, y: 1 }, { x: 1, y: 2 }]]))).toEqual([
+      'slabs.deck.openings[0]: edges 0-1 and 2-3 cross or touch (an outline must not cross itself)',
+    ])
+    const L = [
+      { x: 0, y: 0 },
+      { x: 10, y: 0 },
+      { x: 10, y: 3 },
+      { x: 4, y: 3 },
+      { x: 4, y: 6 },
+      { x: 0, y: 6 },
+    ]
+    expect(errorsOf(withOpenings([[{ x: 1, y: 1 }, { x: 9, y: 1 }, { x: 2, y: 5 }]], L))).toEqual([
+      'slabs.deck.openings[0]: must lie inside the outline (its edge 1-2 crosses outline edge 2-3)',
+    ])
+  })
+
+  it('gives the hand-calculated mass for openings that touch each other', () => {
+    const doc = copy(box)
+    setPath(doc, 'slabs.deck.openings', [
+      [
+        { x: 1, y: 1 },
+        { x: 3, y: 1 },
+        { x: 3, y: 3 },
+        { x: 1, y: 3 },
+      ],
+      [
+        { x: 3, y: 1 },
+        { x: 5, y: 1 },
+        { x: 5, y: 3 },
+        { x: 3, y: 3 },
+      ],
+    ])
+    const r = analyzeProject(projectOf(doc).project)
+    // hand calculation: 600 kg/m² × (10 × 6 − 2 × 2 − 2 × 2) m² = 31 200 kg
+    expect(r.floors[0]!.mass).toBeCloseTo(31200, 6)
   })
 
   it('accepts an opening that touches the outline edge', () => {

@@ -1,7 +1,7 @@
 import type { Point, Project } from '@/model'
 import { pointInPolygon } from '../geometry/hitTest'
 import type { CommandOutcome } from './result'
-import { checkPolygon, refuse } from './result'
+import { checkPolygon, checkSlabRings, refuse } from './result'
 
 export interface AddOpeningArgs {
   readonly slab: string
@@ -17,5 +17,7 @@ export function addOpening(doc: Project, args: AddOpeningArgs): CommandOutcome {
   const outside = args.points.findIndex((p) => !pointInPolygon(p, slab.outline))
   if (outside >= 0) return refuse(`points[${outside}]: opening vertex lies outside slab "${args.slab}"`)
   const openings = [...slab.openings, args.points.map((p) => ({ x: p.x, y: p.y }))]
+  const rings = checkSlabRings(args.slab, slab.outline, openings)
+  if (rings) return refuse(rings)
   return { ...doc, slabs: { ...doc.slabs, [args.slab]: { ...slab, openings } } }
 }

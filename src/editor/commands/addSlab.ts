@@ -2,7 +2,7 @@ import type { FloorId, Point, Project, Slab, SlabId } from '@/model'
 import { createId } from '@/model'
 import { ELEMENT_DEFAULTS } from './defaults'
 import type { CommandOutcome } from './result'
-import { checkFloor, checkNonNegative, checkPolygon, refuse } from './result'
+import { checkFloor, checkNonNegative, checkPolygon, checkSlabRings, refuse } from './result'
 
 export interface AddSlabArgs {
   readonly floor: FloorId
@@ -25,6 +25,8 @@ export function addSlab(doc: Project, args: AddSlabArgs): CommandOutcome {
   if (c) return refuse(c)
   const id = (args.id ?? createId<SlabId>('s')) as SlabId
   if (doc.slabs[id]) return refuse(`id: slab "${id}" already exists`)
+  const rings = checkSlabRings(id, args.outline, openings)
+  if (rings) return refuse(rings)
   const slab: Slab = { id, floor: args.floor, outline: [...args.outline], openings: openings.map((o) => [...o]), areaMass }
   return { ...doc, slabs: { ...doc.slabs, [id]: slab } }
 }

@@ -1,6 +1,6 @@
 /** Command result types and small validation helpers shared by the commands. */
 import type { BaseRef, FloorId, Point, Project } from '@/model'
-import { floorIndex } from '@/model'
+import { POLYGON_TOLERANCE, floorIndex, simplePolygonProblem, slabPolygonProblems } from '@/model'
 
 /** A command's refusal: the document is unchanged; `message` names the field and the problem. */
 export interface Refusal {
@@ -112,7 +112,30 @@ export function checkPolygon(field: string, points: unknown): Check {
   if (c) return c
   const area = Math.abs(signedArea(points as Point[]))
   if (!(area > 1e-9)) return `${field}: polygon has zero area`
-  return undefined
+  const pts = points as Point[]
+  const scale = Math.max(1, maxAbs(pts))
+  const simple = simplePolygonProblem(pts, POLYGON_TOLERANCE * scale)
+  return simple ? `${field}: ${simple}` : undefined
+}
+
+function maxAbs(pts: readonly Point[]): number {
+  let s = 0
+  for (const p of pts) s = Math.max(s, Math.abs(p.x), Math.abs(p.y))
+  return s
+}
+
+/**
+ * The loader's slab geometry rules (self-crossing rings, openings outside or crossing the outline,
+ * overlapping, nested or crossing openings) as one refusal message with the file path, e.g.
+ * `slabs.s1.openings[1]: overlaps openings[0] (openings must not overlap each other)`.
+ */
+export function checkSlabRings(
+  slabId: string,
+  outline: readonly Point[],
+  openings: readonly (readonly Point[])[],
+): Check {
+  const first = slabPolygonProblems(outline, openings)[0]
+  return first ? `slabs.${slabId}.${first.path}: ${first.message}` : undefined
 }
 
 /** The range of floors a base/top pair spans, bottom first (floor ids). */

@@ -1,7 +1,7 @@
 /** Editing one ring (the outline or an opening) of a slab. */
 import type { Point, Project, Slab } from '@/model'
 import type { CommandOutcome } from './result'
-import { checkPolygon, refuse } from './result'
+import { checkPolygon, checkSlabRings, refuse } from './result'
 
 /** Which ring of a slab: its outer outline, or opening number n (0-based). */
 export type SlabRing = 'outline' | number
@@ -33,6 +33,8 @@ export function replaceRing(
     ring === 'outline'
       ? { ...slab, outline: edited }
       : { ...slab, openings: slab.openings.map((o, i) => (i === ring ? edited : o)) }
+  const rings = checkSlabRings(slabId, next.outline, next.openings)
+  if (rings) return refuse(rings)
   return { ...doc, slabs: { ...doc.slabs, [slabId]: next } }
 }
 

@@ -11,6 +11,7 @@ import {
   checkPoint,
   checkPoints,
   checkPolygon,
+  checkSlabRings,
   checkPositive,
   checkRange,
   checkSegment,
@@ -163,6 +164,7 @@ function checkSlab(doc: Project, s: Slab): Check {
     checkFloor(doc, 'floor', s.floor) ??
     checkPolygon('outline', s.outline) ??
     s.openings.map((o, i) => checkPolygon(`openings[${i}]`, o)).find((m) => m !== undefined) ??
+    checkSlabRings(s.id, s.outline, s.openings) ??
     checkNonNegative('areaMass', s.areaMass)
   )
 }

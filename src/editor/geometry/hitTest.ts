@@ -1,4 +1,5 @@
 /** Plan-space hit testing (pure): distances, point in polygon, picking and box selection. */
+import { minOf } from '@/model'
 import type { FloorId, Point, Project } from '@/model'
 import type { PlanKind } from '../commands/records'
 import { visibleRecords } from './visible'
@@ -86,7 +87,7 @@ export function hitTestAll(doc: Project, floor: FloorId, p: Point, tolerance: nu
   }
   for (const s of v.slabs) {
     if (pointInSlab(p, s)) hits.push({ id: s.id, kind: 'slabs', distance: 0 })
-    else near(s.id, 'slabs', Math.min(distanceToPolygonEdge(p, s.outline), ...s.openings.map((o) => distanceToPolygonEdge(p, o))))
+    else near(s.id, 'slabs', minOf(s.openings.map((o) => distanceToPolygonEdge(p, o)), distanceToPolygonEdge(p, s.outline)))
   }
   return hits.sort((a, b) => PRIORITY[a.kind] - PRIORITY[b.kind] || a.distance - b.distance)
 }

@@ -167,9 +167,13 @@ export function amplificationFactor(
   return Math.min(rule.max, Math.max(rule.min, raw))
 }
 
-/** Overall verdict: fail if a row fails, pass if one passes and none fails, else not-applicable. */
+/**
+ * Overall verdict: fail if a row fails; otherwise not-checked if a row could not be checked (a partial
+ * pass is not a pass); pass if one passes; else not-applicable.
+ */
 export function overallVerdict(rows: readonly CheckRow[]): Verdict {
   if (rows.some((r) => r.verdict === 'fail')) return 'fail'
+  if (rows.some((r) => r.verdict === 'not-checked')) return 'not-checked'
   if (rows.some((r) => r.verdict === 'pass')) return 'pass'
   return 'not-applicable'
 }
@@ -205,6 +209,8 @@ export function buildEvaluation(
 export interface TorsionCheckInput {
   readonly caseId: StaticCaseId
   readonly row: StoryTorsionRow
+  /** Why this story cannot be checked in this case (e.g. no plan extent across the load); absent: it can. */
+  readonly notCheckable?: string
 }
 
 
@@ -225,10 +231,10 @@ export function torsionCheckRows(
     ? 'max/avg floor displacement at extreme points'
     : 'max/avg story drift at extreme points'
   const rows: CheckRow[] = []
-  for (const { caseId, row } of inputs) {
+  for (const { caseId, row, notCheckable } of inputs) {
     const ratio = onDisplacement ? row.displacementRatio : row.driftRatio
     const classify = (): string => {
-      if (empty) return 'no movement at extreme points'
+      if (missing) return `not checked: ${missing}`
       if (set.extremeRatio !== undefined && ratio > set.extremeRatio) return labels.extreme
       if (set.irregularRatio !== undefined && ratio > set.irregularRatio) return labels.irregular
       return labels.regular
@@ -237,8 +243,11 @@ export function torsionCheckRows(
     const empty = onDisplacement
       ? row.displacementMax === 0 && row.displacementAvg === 0
       : row.driftMax === 0 && row.driftAvg === 0
-    const verdictFor = (limit: number): Verdict =>
-      !empty && Number.isFinite(ratio) ? (ratio <= limit ? 'pass' : 'fail') : 'not-applicable'
+    // A missing number is 'not-checked', never a pass.
+    const missing =
+      notCheckable ??
+      (empty ? 'no movement at the extreme points' : !Number.isFinite(ratio) ? 'the ratio is not a number' : null)
+    const verdictFor = (limit: number): Verdict => (missing ? 'not-checked' : ratio <= limit ? 'pass' : 'fail')
     if (set.irregularRatio !== undefined) {
       rows.push({
         floorId: row.floorId,
@@ -261,7 +270,7 @@ export function torsionCheckRows(
         limit: set.extremeRatio,
         verdict: verdictFor(set.extremeRatio),
         clause: clauses.extreme,
-        label: ratio > set.extremeRatio ? labels.extreme : `not ${labels.extreme}`,
+        label: missing ? `not checked: ${missing}` : ratio > set.extremeRatio ? labels.extreme : `not ${labels.extreme}`,
         comparison: '<=',
       })
     }
@@ -310,7 +319,7 @@ export function evaluateRegularity(
       const other = dir === 'x' ? 'y' : 'x'
       if (set.eccentricityToRadius !== undefined) {
         const limit = set.eccentricityToRadius * r
-        const verdict: Verdict = usable ? (e0 <= limit ? 'pass' : 'fail') : 'not-applicable'
+        const verdict: Verdict = usable ? (e0 <= limit ? 'pass' : 'fail') : 'not-checked'
         rows.push({
           floorId,
           caseId: dir,
@@ -333,7 +342,7 @@ export function evaluateRegularity(
       if (set.radiusToGyration !== undefined) {
         const limit = set.radiusToGyration * ls
         const ok = usable && Number.isFinite(ls) && ls > 0
-        const verdict: Verdict = ok ? (r >= limit ? 'pass' : 'fail') : 'not-applicable'
+        const verdict: Verdict = ok ? (r >= limit ? 'pass' : 'fail') : 'not-checked'
         rows.push({
           floorId,
           caseId: dir,

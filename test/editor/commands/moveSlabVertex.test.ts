@@ -29,4 +29,12 @@ describe('moveSlabVertex', () => {
     checkRefused(store, 'moveSlabVertex', { slab: 's1', ring: 3, index: 0, to: { x: 0, y: 0 } }, 'has no openings[3]')
     checkRefused(store, 'moveSlabVertex', { slab: 's1', ring: 0, index: 0, to: { x: Number.NaN, y: 0 } }, 'to.x: must be a number')
   })
+
+  it('refuses a move that makes the outline cross the opening or itself, keeping the document', () => {
+    const store = createTestEditor()
+    // outline corner (12, 8) pulled to (3, 3): the outline edge now cuts through the opening (2..4, 2..4)
+    checkRefused(store, 'moveSlabVertex', { slab: 's1', index: 2, to: { x: 3, y: 3 } }, 'slabs.s1.openings[0]: must lie inside the outline')
+    // corner (0, 8) moved to (14, 4): edge 3-0 now crosses edge 1-2 (a bow tie)
+    checkRefused(store, 'moveSlabVertex', { slab: 's1', index: 3, to: { x: 14, y: 4 } }, 'outline: edges 1-2 and 3-0 cross or touch')
+  })
 })

@@ -16,12 +16,23 @@ describe('removeSlabVertex', () => {
   })
 
   it('is undone by a bail when cancelled mid-interaction', () => {
-    checkCancel(createTestEditor(), 'removeSlabVertex', { slab: 's1', index: 0 })
+    checkCancel(createTestEditor(), 'removeSlabVertex', { slab: 's1', index: 2 })
+  })
+
+  it('refuses a cut that leaves the opening outside the outline, keeping the document (was: accepted)', () => {
+    // removing corner (0, 0) of the 12 x 8 m outline leaves the triangle below y = 8 - 2x/3, which
+    // misses the opening's corner (2, 2) (hand calculation)
+    checkRefused(
+      createTestEditor(),
+      'removeSlabVertex',
+      { slab: 's1', index: 0 },
+      'slabs.s1.openings[0]: must lie inside the outline (vertex 0 at (2, 2) is outside)',
+    )
   })
 
   it('refuses to leave fewer than 3 vertices', () => {
     const store = createTestEditor()
-    execute(store, 'removeSlabVertex', { slab: 's1', index: 0 })
+    execute(store, 'removeSlabVertex', { slab: 's1', index: 2 })
     checkRefused(store, 'removeSlabVertex', { slab: 's1', index: 0 }, 'outline: a polygon needs at least 3 vertices')
   })
 })
