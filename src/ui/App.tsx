@@ -49,6 +49,9 @@ import { downloadProject, readProjectText } from './projectFile'
 import { formatQuantity, fromDisplay } from './quantities'
 import { ResultsPanel } from './ResultsPanel'
 import { StatusLine } from './StatusLine'
+import { LAYOUTS, layoutForKey } from './workbench/layouts'
+import type { LayoutId } from './workbench/layouts'
+import { readStoredLayouts, Workbench } from './workbench/Workbench'
 
 export interface AppProps {
   readonly store: EditorStore
@@ -123,10 +126,16 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
   const state = useAnalysis(analysis)
 
   const [units, setUnits] = useState<UnitSystem>(storedUnits)
+  const [layout, setLayout] = useState<LayoutId>(() => readStoredLayouts().active)
   const [showOverlays, setShowOverlays] = useState(true)
   // Time history is the heaviest stage: run it only while the engineer asks for the ground-motion response.
   const [withMotion, setWithMotion] = useState(false)
   const [fitRequest, setFitRequest] = useState(0)
+  // A new layout resizes the plan pane: fit the plan again once its new size is measured.
+  const chooseLayout = useCallback((id: LayoutId) => {
+    setLayout(id)
+    setFitRequest((n) => n + 1)
+  }, [])
   const [banner, setBanner] = useState<Banner | null>(startupNotice ? { kind: 'info', title: startupNotice, lines: [] } : null)
   const [autosavedAt, setAutosavedAt] = useState<string | null>(null)
   const [statusNote, setStatusNote] = useState<string | null>(null)
@@ -214,6 +223,11 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
         if (action.canRun(ctx)) action.run(ctx)
         return
       }
+      const nextLayout = layoutForKey(e)
+      if (nextLayout) {
+        e.preventDefault()
+        chooseLayout(nextLayout)
+      }
     }
     const onBlur = (): void => {
       if (store.getState().tool.state !== 'idle') dispatch(store, { type: 'cancel' })
@@ -224,7 +238,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
       window.removeEventListener('keydown', onKey)
       window.removeEventListener('blur', onBlur)
     }
-  }, [ctx, store])
+  }, [chooseLayout, ctx, store])
 
   const onOpenChange = async (e: ChangeEvent<HTMLInputElement>): Promise<void> => {
     const file = e.target.files?.[0]
@@ -390,6 +404,20 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
             ))}
           </div>
         ))}
+        <div className="group" role="group" aria-label="Layout">
+          {LAYOUTS.map((l) => (
+            <button
+              key={l.id}
+              type="button"
+              data-testid={`layout-${l.id}`}
+              aria-pressed={layout === l.id}
+              title={`${l.hint} (${l.key})`}
+              onClick={() => chooseLayout(l.id)}
+            >
+              {l.label}
+            </button>
+          ))}
+        </div>
         <div className="group" role="group" aria-label="Units">
           {(['SI', 'US'] as const).map((u) => (
             <button key={u} type="button" data-testid={`units-${u}`} aria-pressed={units === u} onClick={() => setUnits(u)}>
@@ -440,110 +468,113 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
           )}
         </div>
       ) : null}
-      <div className="workspace">
-        <aside className="side">
+      <Workbench
+        layout={layout}
+        floors={
           <ErrorBoundary name="Floors">
             <MemoFloorStack floors={doc.floors} current={floorId} units={units} onSelect={onSelectFloor} actions={floorActions} />
           </ErrorBoundary>
-        </aside>
-        <main className="center">
-          <div className="views">
-            <ErrorBoundary name="Plan">
-              <div className="plan-wrap" style={{ position: 'relative', minWidth: 0, minHeight: 0, display: 'grid' }}>
-                <PlanCanvas
-                  project={doc}
-                  scene={scene}
-                  bounds={bounds}
-                  units={units}
-                  selection={new Set(selection)}
-                  overlay={overlay}
-                  overlayStale={state.isStale || state.error !== null}
-                  showOverlays={showOverlays}
-                  preview={preview}
-                  snap={snap}
-                  handles={handles}
-                  readout={readout}
-                  fitRequest={fitRequest}
-                  cursor={tool.id === 'pick' ? 'default' : 'crosshair'}
-                  onPointer={onPointer}
-                  onViewChange={onViewChange}
-                />
-                <div className="plan-note" data-testid="plan-floor">
-                  {floor ? `Floor ${floorNumber}: ${floor.name}` : ''}
-                  {scene.slabsLinked ? ' · slabs and masses as typical floor' : ''}
-                </div>
-                {numericMode ? (
-                  <form
-                    className="numeric-entry"
-                    data-testid="numeric-entry"
-                    onSubmit={(e) => {
-                      e.preventDefault()
-                      submitNumeric()
-                    }}
-                  >
-                    <label htmlFor="numeric-input">{numericMode === 'offset' ? 'Move by Δx, Δy' : 'Length, angle°'}</label>
-                    <input
-                      id="numeric-input"
-                      data-testid="numeric-input"
-                      type="text"
-                      value={numericText}
-                      placeholder={numericMode === 'offset' ? (units === 'SI' ? '1.5, 0' : '5, 0') : units === 'SI' ? '6, 90' : '20, 90'}
-                      onChange={(e) => setNumericText(e.target.value)}
-                      onKeyDown={(e) => {
-                        if (e.key === 'Escape') {
-                          setNumericText('')
-                          ;(e.target as HTMLInputElement).blur()
-                        }
-                      }}
-                    />
-                    <button type="submit">Apply</button>
-                  </form>
-                ) : null}
+        }
+        plan={
+          <ErrorBoundary name="Plan">
+            <div className="plan-wrap" style={{ position: 'relative', minWidth: 0, minHeight: 0, display: 'grid' }}>
+              <PlanCanvas
+                project={doc}
+                scene={scene}
+                bounds={bounds}
+                units={units}
+                selection={new Set(selection)}
+                overlay={overlay}
+                overlayStale={state.isStale || state.error !== null}
+                showOverlays={showOverlays}
+                preview={preview}
+                snap={snap}
+                handles={handles}
+                readout={readout}
+                fitRequest={fitRequest}
+                cursor={tool.id === 'pick' ? 'default' : 'crosshair'}
+                onPointer={onPointer}
+                onViewChange={onViewChange}
+              />
+              <div className="plan-note" data-testid="plan-floor">
+                {floor ? `Floor ${floorNumber}: ${floor.name}` : ''}
+                {scene.slabsLinked ? ' · slabs and masses as typical floor' : ''}
               </div>
-            </ErrorBoundary>
-            <div className="viewer-slot">
-              <ErrorBoundary name="3D view">
-                <MemoViewerPane
-                  project={viewerDoc}
-                  result={viewerResult}
-                  isStale={viewerStale}
-                  {...(viewerInitial ? { initial: viewerInitial } : {})}
-                />
-              </ErrorBoundary>
+              {numericMode ? (
+                <form
+                  className="numeric-entry"
+                  data-testid="numeric-entry"
+                  onSubmit={(e) => {
+                    e.preventDefault()
+                    submitNumeric()
+                  }}
+                >
+                  <label htmlFor="numeric-input">{numericMode === 'offset' ? 'Move by Δx, Δy' : 'Length, angle°'}</label>
+                  <input
+                    id="numeric-input"
+                    data-testid="numeric-input"
+                    type="text"
+                    value={numericText}
+                    placeholder={numericMode === 'offset' ? (units === 'SI' ? '1.5, 0' : '5, 0') : units === 'SI' ? '6, 90' : '20, 90'}
+                    onChange={(e) => setNumericText(e.target.value)}
+                    onKeyDown={(e) => {
+                      if (e.key === 'Escape') {
+                        setNumericText('')
+                        ;(e.target as HTMLInputElement).blur()
+                      }
+                    }}
+                  />
+                  <button type="submit">Apply</button>
+                </form>
+              ) : null}
             </div>
-          </div>
-          <div className="lower">
-            <ErrorBoundary name="Problems">
-              <ProblemsPanel issues={issues} analysisError={state.error} notices={message ? [message] : []} onPick={onPickIssue} />
-            </ErrorBoundary>
-            <ErrorBoundary name="Results">
-              <MemoResultsPanel floors={doc.floors} result={viewerResult} isStale={viewerStale} units={units} />
-            </ErrorBoundary>
-          </div>
-        </main>
-        <aside className="side right">
-          <ErrorBoundary name="Inspector">
-            <Inspector
-              project={doc}
-              selection={selection}
-              units={units}
-              onReplace={onReplace}
-              onDelete={() => {
-                const ids = store.getState().selection
-                if (ids.length) run('delete', () => execute(store, 'deleteElements', { ids }))
-              }}
-              onCopyToFloors={onCopyToFloors}
-              copyMessage={null}
+          </ErrorBoundary>
+        }
+        model={
+          <ErrorBoundary name="3D view">
+            <MemoViewerPane
+              project={viewerDoc}
+              result={viewerResult}
+              isStale={viewerStale}
+              {...(viewerInitial ? { initial: viewerInitial } : {})}
             />
           </ErrorBoundary>
-          <ErrorBoundary name="Balance">
-            <BalancePanel project={doc} onApply={onApplyBalance} />
+        }
+        problems={
+          <ErrorBoundary name="Problems">
+            <ProblemsPanel issues={issues} analysisError={state.error} notices={message ? [message] : []} onPick={onPickIssue} />
           </ErrorBoundary>
-          <ErrorBoundary name="Report">
-            <ReportActions project={doc} result={viewerResult} unitSystem={units} />
+        }
+        results={
+          <ErrorBoundary name="Results">
+            <MemoResultsPanel floors={doc.floors} result={viewerResult} isStale={viewerStale} units={units} />
           </ErrorBoundary>
-        </aside>
-      </div>
+        }
+        side={
+          <>
+            <ErrorBoundary name="Inspector">
+              <Inspector
+                project={doc}
+                selection={selection}
+                units={units}
+                onReplace={onReplace}
+                onDelete={() => {
+                  const ids = store.getState().selection
+                  if (ids.length) run('delete', () => execute(store, 'deleteElements', { ids }))
+                }}
+                onCopyToFloors={onCopyToFloors}
+                copyMessage={null}
+              />
+            </ErrorBoundary>
+            <ErrorBoundary name="Balance">
+              <BalancePanel project={doc} onApply={onApplyBalance} />
+            </ErrorBoundary>
+            <ErrorBoundary name="Report">
+              <ReportActions project={doc} result={viewerResult} unitSystem={units} />
+            </ErrorBoundary>
+          </>
+        }
+      />
       <StatusLine
         analysis={state}
         message={message ?? statusNote}

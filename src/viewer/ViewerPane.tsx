@@ -286,41 +286,48 @@ export function ViewerPane(props: ViewerPaneProps) {
         <PresentationBar store={store} state={state} rows={rows.length} />
       )}
       <div className="gyre-viewer-stage">
-        {glProblem ? (
-          <ViewerUnavailable reason={glProblem} />
-        ) : (
-          <ViewerErrorBoundary resetKey={layout}>
-            <ViewerCanvas
-              layout={layout}
-              motionA={motionA}
-              motionB={motionB}
-              marks={marks}
-              store={store}
-              clock={clock}
-              capture={capture}
-              onFrame={onFrame}
-              transformsA={transformsA}
-              rootState={rootState}
-              {...(onFrameRendered ? { onFrameRendered } : {})}
-            />
-          </ViewerErrorBoundary>
-        )}
-        {banner && (
-          <div className="gyre-viewer-banner" data-testid="viewer-banner">
-            {banner}
+        {/* The legend and plan trace sit beside the canvas, never over the building. */}
+        <div className="gyre-viewer-stage-inner">
+          <div className="gyre-viewer-canvas-box" data-testid="viewer-canvas-box">
+            {glProblem ? (
+              <ViewerUnavailable reason={glProblem} />
+            ) : (
+              <ViewerErrorBoundary resetKey={layout}>
+                <ViewerCanvas
+                  layout={layout}
+                  motionA={motionA}
+                  motionB={motionB}
+                  marks={marks}
+                  store={store}
+                  clock={clock}
+                  capture={capture}
+                  onFrame={onFrame}
+                  transformsA={transformsA}
+                  rootState={rootState}
+                  {...(onFrameRendered ? { onFrameRendered } : {})}
+                />
+              </ViewerErrorBoundary>
+            )}
+            {banner && (
+              <div className="gyre-viewer-banner" data-testid="viewer-banner">
+                {banner}
+              </div>
+            )}
           </div>
-        )}
-        <Legend motion={motionA} colourBy={state.colourBy} amplitude={state.amplitude} />
-        {state.showTrace && (
-          <PlanTrace
-            layout={layout}
-            motion={motionA}
-            marks={marks}
-            store={store}
-            onFrame={onFrame}
-            transforms={transformsA}
-          />
-        )}
+          <div className="gyre-viewer-aside" data-testid="viewer-aside">
+            <Legend motion={motionA} colourBy={state.colourBy} amplitude={state.amplitude} />
+            {state.showTrace && (
+              <PlanTrace
+                layout={layout}
+                motion={motionA}
+                marks={marks}
+                store={store}
+                onFrame={onFrame}
+                transforms={transformsA}
+              />
+            )}
+          </div>
+        </div>
       </div>
       {rows.length > 0 && (
         <div className="gyre-modes">

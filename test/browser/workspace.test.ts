@@ -1,0 +1,132 @@
+/**
+ * The working screen in headless Chromium at 1440 × 900: three layouts switched by click and key,
+ * pane sizes, the layout and dragged sizes kept over a reload, and the 3D legend and plan trace kept
+ * beside the building instead of over it. `GYRE_DOC_SHOTS=1` also writes docs/layout-*.png.
+ */
+import { resolve } from 'node:path'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import type { Page } from 'playwright-core'
+import { openApp } from './appDriver'
+import { startBrowserSession } from './harness'
+import type { BrowserSession } from './harness'
+
+let session: BrowserSession
+
+beforeAll(async () => {
+  session = await startBrowserSession()
+})
+afterAll(async () => {
+  await session?.close()
+})
+
+interface Box {
+  readonly x: number
+  readonly y: number
+  readonly width: number
+  readonly height: number
+}
+
+async function box(page: Page, testId: string): Promise<Box> {
+  const b = await page.locator(`[data-testid="${testId}"]`).first().boundingBox()
+  if (!b) throw new Error(`[test] ${testId} has no box`)
+  return b
+}
+
+const overlaps = (a: Box, b: Box): boolean =>
+  a.x < b.x + b.width - 0.5 && b.x < a.x + a.width - 0.5 && a.y < b.y + b.height - 0.5 && b.y < a.y + a.height - 0.5
+
+async function docShot(page: Page, name: string): Promise<void> {
+  await session.screenshot(page, name)
+  if (process.env.GYRE_DOC_SHOTS === '1') {
+    await page.screenshot({ path: resolve(import.meta.dirname, '../../docs', `${name}.png`) })
+  }
+}
+
+describe('working screen layouts', () => {
+  it('switches layouts by click and by key and sizes the plan and 3D panes to match', async () => {
+    const { page, context, errors } = await session.newPage()
+    await openApp(page, session.url)
+    // Fresh storage: side by side, plan and 3D at equal width (±2 px for the separator rounding).
+    expect(await page.getAttribute('[data-testid=workbench]', 'data-layout')).toBe('side-by-side')
+    let plan = await box(page, 'pane-plan')
+    let model = await box(page, 'pane-model')
+    expect(Math.abs(plan.width - model.width)).toBeLessThan(3)
+    await page.waitForTimeout(300)
+    await docShot(page, 'layout-split')
+
+    await page.click('[data-testid=layout-drafting]')
+    await expect.poll(() => page.getAttribute('[data-testid=workbench]', 'data-layout')).toBe('drafting')
+    expect(await page.getAttribute('[data-testid=layout-drafting]', 'aria-pressed')).toBe('true')
+    plan = await box(page, 'pane-plan')
+    model = await box(page, 'pane-model')
+    expect(plan.width).toBeGreaterThan(1.8 * model.width)
+    expect(plan.width).toBeGreaterThan(560)
+    await page.waitForTimeout(300)
+    await docShot(page, 'layout-plan')
+
+    await page.locator('body').click({ position: { x: 5, y: 895 } })
+    await page.keyboard.press('3')
+    await expect.poll(() => page.getAttribute('[data-testid=workbench]', 'data-layout')).toBe('stage')
+    plan = await box(page, 'pane-plan')
+    model = await box(page, 'pane-model')
+    expect(model.width).toBeGreaterThan(2 * plan.width)
+    // The 3D view itself (not counting legend column and toolbars) is large enough for a meeting.
+    const canvas = await box(page, 'viewer-canvas-box')
+    expect(canvas.width).toBeGreaterThan(560)
+    expect(canvas.height).toBeGreaterThan(380)
+    await page.waitForTimeout(300)
+    await docShot(page, 'layout-3d')
+
+    await page.keyboard.press('2')
+    await expect.poll(() => page.getAttribute('[data-testid=workbench]', 'data-layout')).toBe('side-by-side')
+    expect(errors).toEqual([])
+    await context.close()
+  })
+
+  it('keeps the legend and plan trace beside the 3D canvas in every layout', async () => {
+    const { page, context } = await session.newPage()
+    await openApp(page, session.url)
+    await page.waitForSelector('[data-testid=viewer-legend]')
+    for (const id of ['drafting', 'side-by-side', 'stage']) {
+      await page.click(`[data-testid=layout-${id}]`)
+      await page.waitForTimeout(150)
+      const canvas = await box(page, 'viewer-canvas-box')
+      for (const over of ['viewer-legend', 'viewer-trace']) {
+        if ((await page.locator(`[data-testid=${over}]`).count()) === 0) continue
+        expect(overlaps(canvas, await box(page, over)), `${over} over the canvas in ${id}`).toBe(false)
+      }
+    }
+    await context.close()
+  })
+
+  it('keeps the chosen layout and the dragged pane sizes over a reload', async () => {
+    const { page, context } = await session.newPage()
+    await openApp(page, session.url)
+    await page.click('[data-testid=layout-stage]')
+    await expect.poll(() => page.getAttribute('[data-testid=workbench]', 'data-layout')).toBe('stage')
+    const before = await box(page, 'pane-plan')
+    // Drag the separator between plan and 3D view 120 px to the right.
+    const sep = page.locator('[data-testid=pane-plan] + [data-separator]')
+    const s = await sep.boundingBox()
+    if (!s) throw new Error('[test] separator has no box')
+    await page.mouse.move(s.x + s.width / 2, s.y + s.height / 2)
+    await page.mouse.down()
+    await page.mouse.move(s.x + s.width / 2 + 60, s.y + s.height / 2, { steps: 4 })
+    await page.mouse.move(s.x + s.width / 2 + 120, s.y + s.height / 2, { steps: 4 })
+    await page.mouse.up()
+    const dragged = await box(page, 'pane-plan')
+    expect(dragged.width - before.width).toBeGreaterThan(100)
+    await page.reload()
+    await page.waitForSelector('[data-testid=workbench]')
+    expect(await page.getAttribute('[data-testid=workbench]', 'data-layout')).toBe('stage')
+    expect(await page.getAttribute('[data-testid=layout-stage]', 'aria-pressed')).toBe('true')
+    const after = await box(page, 'pane-plan')
+    expect(Math.abs(after.width - dragged.width)).toBeLessThan(3)
+    // Another layout and back: the stage keeps the dragged size, the drafting layout its own.
+    await page.click('[data-testid=layout-drafting]')
+    await page.click('[data-testid=layout-stage]')
+    await page.waitForTimeout(100)
+    expect(Math.abs((await box(page, 'pane-plan')).width - dragged.width)).toBeLessThan(3)
+    await context.close()
+  })
+})
