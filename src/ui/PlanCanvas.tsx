@@ -6,7 +6,6 @@
  */
 import { useCallback, useEffect, useLayoutEffect, useRef, useState } from 'react'
 import type { PointerEvent as ReactPointerEvent, ReactNode, WheelEvent as ReactWheelEvent } from 'react'
-import { CAUTION_SHORT } from '@/model'
 import type { Point, Project, UnitSystem } from '@/model'
 import type { FloorOverlay } from './floorOverlay'
 import type { PlanScene } from './planScene'
@@ -533,7 +532,6 @@ export function PlanCanvas(props: Props) {
           <strong>max/avg drift {badge.ratio.toFixed(2)}</strong> ({badge.caseId})
           {badge.verdict ? <span className={`verdict verdict-${badge.verdict}`}> {badge.verdict}</span> : null}
           {badge.limit !== null && Number.isFinite(badge.limit) ? <span> · limit {badge.limit.toFixed(2)}</span> : null}
-          <div className="caution small">{CAUTION_SHORT}</div>
         </div>
       ) : null}
       {hover ? (

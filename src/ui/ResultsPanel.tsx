@@ -1,4 +1,3 @@
-import { CAUTION } from '@/model'
 import type { Floor, UnitSystem } from '@/model'
 import type { AnalysisResult } from '@/engine'
 import { characterWords } from '@/viewer'
@@ -23,9 +22,6 @@ export function ResultsPanel({ floors, result, isStale, units }: Props) {
   const regularity = result?.regularity ?? null
   return (
     <section className="results" aria-label="Results summary" data-testid="results-panel">
-      <p className="caution" data-testid="results-caution">
-        {CAUTION}
-      </p>
       {isStale && result ? (
         <p className="stale-note" data-testid="results-stale">
           Updating — these numbers belong to an earlier state of the model.
@@ -138,7 +134,6 @@ export function ResultsPanel({ floors, result, isStale, units }: Props) {
           </tbody>
         </table>
       ) : null}
-      {result ? <p className="caution small">{result.caution}</p> : null}
     </section>
   )
 }

@@ -375,9 +375,12 @@ export function ViewerPane(props: ViewerPaneProps) {
       <p className="gyre-viewer-status" data-testid="viewer-status" role="status">
         {state.message}
       </p>
-      <p className="gyre-viewer-caution" data-testid="viewer-caution">
-        {state.presenting ? CAUTION : CAUTION_SHORT}
-      </p>
+      {/* Full window covers the app's caution line: the presentation says it itself. */}
+      {state.presenting ? (
+        <p className="gyre-viewer-caution" data-testid="viewer-caution">
+          {CAUTION}
+        </p>
+      ) : null}
     </section>
   )
 }

@@ -54,10 +54,11 @@ describe('App', () => {
     }
   })
 
-  it('shows the full caution with the results and the short one in the status line', () => {
+  it('shows one caution line on the screen: the short text, the full text on hover', () => {
     const html = render()
-    expect(html).toContain(CAUTION)
-    expect(html).toContain(CAUTION_SHORT)
+    expect(count(html, CAUTION_SHORT)).toBe(1)
+    expect(count(html, CAUTION)).toBe(1)
+    expect(html).toMatch(new RegExp(`data-testid="screen-caution"[^>]*>${CAUTION_SHORT.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}<`))
   })
 
   it('shows the inspector fields of a selected wall in display units', () => {

@@ -6,11 +6,10 @@
 import { useEffect, useRef, useState } from 'react'
 import { suggestBalance } from '@/engine'
 import type { BalanceOptions, BalanceResult, BalanceSuggestion } from '@/engine'
-import { CAUTION, CAUTION_SHORT, formatNumber } from '@/model'
+import { formatNumber } from '@/model'
 import type { FrameLine, Project, Wall } from '@/model'
 import { BalanceCancelled, createBalanceRunner, createBalanceWorker } from './balanceRunner'
 import type { BalanceRunner } from './balanceRunner'
-import { CautionNote } from './CautionNote'
 
 export interface BalancePanelProps {
   readonly project: Project
@@ -129,7 +128,6 @@ export function BalancePanelView(props: BalancePanelViewProps) {
           )}
         </>
       ) : null}
-      <CautionNote short={CAUTION_SHORT} full={result?.caution ?? CAUTION} testId="balance-caution" />
     </section>
   )
 }

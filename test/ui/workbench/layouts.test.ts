@@ -23,8 +23,8 @@ describe('workbench layouts', () => {
   })
 
   it('favours the plan in drafting and the 3D view on the stage', () => {
-    expect(DEFAULT_SIZES.drafting.views.plan).toBeGreaterThan(DEFAULT_SIZES.drafting.views.model)
-    expect(DEFAULT_SIZES.stage.views.model).toBeGreaterThan(DEFAULT_SIZES.stage.views.plan)
+    expect(DEFAULT_SIZES.drafting.views.plan ?? 0).toBeGreaterThan(DEFAULT_SIZES.drafting.views.model ?? 100)
+    expect(DEFAULT_SIZES.stage.views.model ?? 0).toBeGreaterThan(DEFAULT_SIZES.stage.views.plan ?? 100)
     expect(DEFAULT_SIZES['side-by-side'].views.plan).toBe(DEFAULT_SIZES['side-by-side'].views.model)
   })
 
