@@ -33,6 +33,8 @@ import type { Action, ActionContext } from './actions'
 import type { AnalysisClient, AnalysisState } from './analysisClient'
 import { createAutosaver } from './autosave'
 import { blankProject } from './blankProject'
+import { CentresTable } from './CentresTable'
+import { centresRows } from './centresRows'
 import { ErrorBoundary } from './ErrorBoundary'
 import { FloorStack } from './FloorStack'
 import type { FloorActions } from './FloorStack'
@@ -327,6 +329,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
   const scene = useMemo(() => planScene(doc, floorId), [doc, floorId])
   const bounds = useMemo(() => sceneBounds(doc, scene), [doc, scene])
   const overlay = useMemo(() => floorOverlay(state.result, floorId), [state.result, floorId])
+  const centres = useMemo(() => centresRows(doc.floors, state.result), [doc.floors, state.result])
   const handles = useMemo(
     // Slab vertex handles are drawn with the slab itself; the canvas draws the others.
     () =>
@@ -476,6 +479,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
           </ErrorBoundary>
         }
         plan={
+          <div className="plan-area">
           <ErrorBoundary name="Plan">
             <div className="plan-wrap" style={{ position: 'relative', minWidth: 0, minHeight: 0, display: 'grid' }}>
               <PlanCanvas
@@ -529,6 +533,10 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
               ) : null}
             </div>
           </ErrorBoundary>
+          <ErrorBoundary name="Centres">
+            <CentresTable rows={centres} currentFloor={floorId} units={units} isStale={viewerStale} onSelectFloor={onSelectFloor} />
+          </ErrorBoundary>
+          </div>
         }
         model={
           <ErrorBoundary name="3D view">

@@ -130,3 +130,45 @@ describe('working screen layouts', () => {
     await context.close()
   })
 })
+
+describe('numbers where the eye is', () => {
+  it('shows every floor centres beside the plan, the current floor highlighted, and a row click changes floor', async () => {
+    const { page, context, errors } = await session.newPage()
+    await openApp(page, session.url)
+    const rows = page.locator('[data-testid=centres-table] tbody tr')
+    await expect.poll(() => rows.count()).toBe(7)
+    const current = page.locator('[data-testid=centres-table] tr[aria-current=true]')
+    await expect.poll(() => current.count()).toBe(1)
+    // The demo opens on Level 1; it is the bottom row (top floor first).
+    expect(await current.first().locator('td').first().textContent()).toBe('1')
+    expect(await page.locator('[data-testid=centres-table]').textContent()).not.toMatch(/NaN/)
+    await rows.nth(0).click()
+    await expect.poll(() => page.textContent('[data-testid=plan-floor]')).toMatch(/^Floor 7/)
+    await expect.poll(() => current.first().locator('td').first().textContent()).toBe('7')
+    expect(errors).toEqual([])
+    await context.close()
+  })
+
+  it('labels the circles and the CM to CR arrow, shows numbers on hover, and has a key for every symbol', async () => {
+    const { page, context } = await session.newPage()
+    await openApp(page, session.url)
+    for (const id of ['label-ls', 'label-rx', 'label-ry', 'label-ecc']) {
+      expect(await page.locator(`[data-testid=${id}]`).count(), id).toBe(1)
+    }
+    expect(await page.textContent('[data-testid=label-ls]')).toMatch(/^l_s \d+(\.\d)? m$/)
+    const cm = await page.locator('[data-testid=marker-cm] circle').first().boundingBox()
+    if (!cm) throw new Error('[test] CM marker has no box')
+    await page.mouse.move(cm.x + cm.width / 2, cm.y + cm.height / 2)
+    await page.waitForSelector('[data-testid=tip-cm]')
+    expect(await page.textContent('[data-testid=tip-cm]')).toContain('Centre of mass (CM)')
+    const cr = await page.locator('[data-testid=marker-cr] path').first().boundingBox()
+    if (!cr) throw new Error('[test] CR marker has no box')
+    await page.mouse.move(cr.x + cr.width / 2, cr.y + cr.height * 0.7)
+    await page.waitForSelector('[data-testid=tip-cr]')
+    expect(await page.textContent('[data-testid=tip-cr]')).toMatch(/e_x\/r_x \d\.\d\d/)
+    await page.click('[data-testid=plan-key-toggle] summary')
+    expect(await page.locator('[data-testid=plan-key] li').count()).toBeGreaterThanOrEqual(18)
+    await session.screenshot(page, 'plan-numbers')
+    await context.close()
+  })
+})
