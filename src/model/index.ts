@@ -38,6 +38,8 @@ export type {
 export { createId } from './ids'
 export { computeElevations, contentFloorId, elementFloorRange, floorContent, floorIndex } from './floors'
 export { CAUTION, CAUTION_SHORT } from './caution'
+export { MODE_COLUMNS, modeColumn, modeHeaderLabel } from './modeHeaders'
+export type { ModeColumn, ModeColumnKey } from './modeHeaders'
 export {
   CURRENT_VERSION,
   DEFAULT_SETTINGS,

@@ -3,7 +3,7 @@ import { advance } from '@react-three/fiber'
 import type { RootState } from '@react-three/fiber'
 import { useStore } from 'zustand'
 import type { AnalysisResult } from '@/engine'
-import { CAUTION, CAUTION_SHORT } from '@/model'
+import { CAUTION, CAUTION_SHORT, MODE_COLUMNS, modeHeaderLabel } from '@/model'
 import type { Point, Project } from '@/model'
 import { layoutBuilding } from './buildingLayout'
 import type { FloorMarks } from './BuildingInstance'
@@ -334,17 +334,11 @@ export function ViewerPane(props: ViewerPaneProps) {
           <table data-testid="mode-table">
             <thead>
               <tr>
-                <th>Mode</th>
-                <th>T (s)</th>
-                <th>f (Hz)</th>
-                <th title="Effective modal mass ratio along X">X %</th>
-                <th title="Effective modal mass ratio along Y">Y %</th>
-                <th title="Effective modal mass ratio in rotation about the building centre of mass">Rot %</th>
-                <th>ΣX %</th>
-                <th>ΣY %</th>
-                <th>ΣRot %</th>
-                <th title="Share of the kinetic energy in rotation about each floor's centre of mass">Torsion %</th>
-                <th>Class</th>
+                {MODE_COLUMNS.map((c) => (
+                  <th key={c.key} title={c.hint}>
+                    {modeHeaderLabel(c)}
+                  </th>
+                ))}
               </tr>
             </thead>
             <tbody>
