@@ -57,6 +57,7 @@ export {
   FOOT,
   INCH,
   KIP,
+  LENGTH_UNITS,
   POUND_FORCE,
   QUANTITIES,
   STANDARD_GRAVITY,
@@ -64,9 +65,10 @@ export {
   formatNumber,
   formatQuantity,
   fromDisplay,
+  parseTypedNumber,
   storageUnit,
   toDisplay,
   unitLabel,
 } from './units'
-export type { Quantity, UnitSystem } from './units'
+export type { Quantity, TypedNumber, UnitSystem } from './units'
 export { demoProject } from './demo'
