@@ -50,6 +50,8 @@ import { ProblemsPanel } from './ProblemsPanel'
 import { downloadProject, readProjectText } from './projectFile'
 import { formatQuantity, fromDisplay } from './quantities'
 import { ResultsPanel } from './ResultsPanel'
+import { normaliseNumericText } from './numericText'
+import { ShortcutSheet } from './ShortcutSheet'
 import { StatusLine } from './StatusLine'
 import { LAYOUTS, layoutForKey } from './workbench/layouts'
 import type { LayoutId } from './workbench/layouts'
@@ -142,6 +144,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
   const [autosavedAt, setAutosavedAt] = useState<string | null>(null)
   const [statusNote, setStatusNote] = useState<string | null>(null)
   const [numericText, setNumericText] = useState('')
+  const [sheetOpen, setSheetOpen] = useState(false)
   const [viewScale, setViewScale] = useState(20)
   const onViewChange = useCallback((v: { scale: number }) => setViewScale(v.scale), [])
   const fileInput = useRef<HTMLInputElement>(null)
@@ -212,7 +215,36 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
   // Keyboard shortcuts from the action table; typing in a field is left alone.
   useEffect(() => {
     const onKey = (e: KeyboardEvent): void => {
+      const mod = e.ctrlKey || e.metaKey
+      // Ctrl+Z / Ctrl+Y in a property box: apply the box (blur commits it), then undo or redo.
+      if (isTyping(e.target) && mod && (e.key.toLowerCase() === 'z' || e.key.toLowerCase() === 'y')) {
+        const box = e.target as HTMLElement
+        if (box.closest('.inspector, .floor-stack')) {
+          e.preventDefault()
+          box.blur()
+          const action = actionForKey(e)
+          if (action?.canRun(ctx)) action.run(ctx)
+        }
+        return
+      }
       if (isTyping(e.target)) return
+      if (e.key === 'Escape') setSheetOpen(false)
+      if (e.key === '?') {
+        e.preventDefault()
+        setSheetOpen((v) => !v)
+        return
+      }
+      // While a segment or outline is being drawn, typed numbers go to the length, angle box.
+      const st = store.getState()
+      if (!mod && !e.altKey && DRAWING_TOOLS.has(st.tool.id) && st.tool.state !== 'idle' && /^[0-9.@<-]$/.test(e.key)) {
+        const input = document.getElementById('numeric-input')
+        if (input instanceof HTMLInputElement) {
+          e.preventDefault()
+          input.focus()
+          setNumericText((t) => t + e.key)
+          return
+        }
+      }
       // While a gesture is in progress Enter and Backspace belong to the tool (finish, drop vertex).
       if ((e.key === 'Enter' || e.key === 'Backspace') && store.getState().tool.state !== 'idle') {
         e.preventDefault()
@@ -351,7 +383,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
   const numericMode = DRAWING_TOOLS.has(tool.id) ? 'length-angle' : tool.id === 'pick' && selection.length > 0 ? 'offset' : null
   const submitNumeric = (): void => {
     if (!numericMode) return
-    const parsed = parseNumericEntry(numericText, numericMode, fromDisplay(1, 'length', units))
+    const parsed = parseNumericEntry(normaliseNumericText(numericText), numericMode, fromDisplay(1, 'length', units))
     if (!parsed.ok) {
       setMessage(store, parsed.message)
       return
@@ -423,8 +455,15 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
         </div>
         <div className="group" role="group" aria-label="Units">
           {(['SI', 'US'] as const).map((u) => (
-            <button key={u} type="button" data-testid={`units-${u}`} aria-pressed={units === u} onClick={() => setUnits(u)}>
-              {u === 'SI' ? 'SI (kN, m)' : 'US (kip, ft)'}
+            <button
+              key={u}
+              type="button"
+              data-testid={`units-${u}`}
+              aria-pressed={units === u}
+              title={u === 'SI' ? 'SI units: m, mm, kN, t, s (U switches)' : 'US customary units: ft, in, kip, s (U switches)'}
+              onClick={() => setUnits(u)}
+            >
+              {u === 'SI' ? 'Metric' : 'US customary'}
             </button>
           ))}
         </div>
@@ -583,6 +622,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
           </>
         }
       />
+      {sheetOpen ? <ShortcutSheet onClose={() => setSheetOpen(false)} /> : null}
       <StatusLine
         analysis={state}
         message={message ?? statusNote}

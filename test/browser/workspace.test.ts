@@ -6,7 +6,7 @@
 import { resolve } from 'node:path'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
-import { openApp } from './appDriver'
+import { clickPlan, countRecords, openApp } from './appDriver'
 import { startBrowserSession } from './harness'
 import type { BrowserSession } from './harness'
 
@@ -169,6 +169,77 @@ describe('numbers where the eye is', () => {
     await page.click('[data-testid=plan-key-toggle] summary')
     expect(await page.locator('[data-testid=plan-key] li').count()).toBeGreaterThanOrEqual(18)
     await session.screenshot(page, 'plan-numbers')
+    await context.close()
+  })
+})
+
+async function thickness(page: Page): Promise<number> {
+  return page.evaluate(() => {
+    const h = (window as unknown as { __gyre: { store: { getState(): { doc: { walls: Record<string, { thickness: number }> } } } } }).__gyre
+    return h.store.getState().doc.walls['gable-e']?.thickness ?? NaN
+  })
+}
+
+describe('number entry with units', () => {
+  it('reads a typed unit in a mm box and asks before taking a 0.25 mm wall', async () => {
+    const { page, context, errors } = await session.newPage()
+    await openApp(page, session.url)
+    await page.getByTestId('action-tool-pick').click()
+    await clickPlan(page, { x: 30, y: 5 })
+    const box = page.getByTestId('field-thickness')
+    await expect.poll(() => box.inputValue()).toBe('250')
+    // 1 in = 0.0254 m exactly (NIST SP 811 Appendix B.8): 12 in = 0.3048 m; 1'-6" = 0.4572 m.
+    await box.fill('12 in')
+    await box.press('Enter')
+    await expect.poll(() => thickness(page)).toBeCloseTo(0.3048, 9)
+    await box.fill('0.3 m')
+    await box.press('Enter')
+    await expect.poll(() => thickness(page)).toBeCloseTo(0.3, 9)
+    await box.fill("1'-6\"")
+    await box.press('Enter')
+    await expect.poll(() => thickness(page)).toBeCloseTo(0.4572, 9)
+    // "0.25" in the mm box is 0.25 mm: not taken silently.
+    await box.fill('0.25')
+    await box.press('Enter')
+    await expect.poll(() => page.getByTestId('field-thickness-warning').textContent()).toMatch(/unusual for a wall thickness/)
+    expect(await thickness(page)).toBeCloseTo(0.4572, 9)
+    await box.press('Enter')
+    await expect.poll(() => thickness(page)).toBeCloseTo(0.00025, 12)
+    expect(errors).toEqual([])
+    await context.close()
+  })
+})
+
+describe('keyboard', () => {
+  it('sends typed numbers to the entry box while drawing, undoes from a property box, and opens the ? sheet', async () => {
+    const { page, context, errors } = await session.newPage()
+    await openApp(page, session.url)
+    const walls = await countRecords(page, 'walls')
+    await page.keyboard.press('w')
+    // Away from grid lines and clear of the entry box at the lower left of the plan.
+    await clickPlan(page, { x: 20.5, y: 2.5 })
+    await page.keyboard.type('@6<90')
+    expect(await page.getByTestId('numeric-input').inputValue()).toBe('@6<90')
+    await page.keyboard.press('Enter')
+    await expect.poll(() => countRecords(page, 'walls')).toBe(walls + 1)
+    await page.keyboard.press('Escape')
+
+    // Ctrl+Z with the focus in an inspector box undoes the last change (the new wall).
+    await page.keyboard.press('v')
+    await clickPlan(page, { x: 30, y: 5 })
+    await page.getByTestId('field-thickness').focus()
+    await page.keyboard.press('Control+z')
+    await expect.poll(() => countRecords(page, 'walls')).toBe(walls)
+
+    await page.locator('body').click({ position: { x: 5, y: 895 } })
+    await page.keyboard.press('?')
+    await page.waitForSelector('[data-testid=shortcut-sheet]')
+    expect(await page.locator('[data-testid=shortcut-sheet] [data-testid=plan-key] li').count()).toBeGreaterThanOrEqual(18)
+    expect(await page.textContent('[data-testid=shortcut-sheet]')).toContain('Ctrl+Z')
+    await session.screenshot(page, 'shortcut-sheet')
+    await page.keyboard.press('Escape')
+    await expect.poll(() => page.locator('[data-testid=shortcut-sheet]').count()).toBe(0)
+    expect(errors).toEqual([])
     await context.close()
   })
 })
