@@ -358,6 +358,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
     setSelection(store, issue.refs)
   }
 
+  const nameOf = useCallback((id: string): string => recordName(store.getState().doc, id), [store])
   const scene = useMemo(() => planScene(doc, floorId), [doc, floorId])
   const bounds = useMemo(() => sceneBounds(doc, scene), [doc, scene])
   const overlay = useMemo(() => floorOverlay(state.result, floorId), [state.result, floorId])
@@ -589,7 +590,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
         }
         problems={
           <ErrorBoundary name="Problems">
-            <ProblemsPanel issues={issues} analysisError={state.error} notices={message ? [message] : []} onPick={onPickIssue} />
+            <ProblemsPanel issues={issues} analysisError={state.error} notices={message ? [message] : []} onPick={onPickIssue} nameOf={nameOf} />
           </ErrorBoundary>
         }
         results={
@@ -633,6 +634,16 @@ export function App({ store, analysis, startupNotice = null, viewerInitial }: Ap
       />
     </div>
   )
+}
+
+/** The name of the element, slab, mass or floor with this id; the id when none has it. */
+export function recordName(doc: Project, id: string): string {
+  const groups = [doc.walls, doc.frameLines, doc.columns, doc.slabs, doc.pointMasses, doc.lineMasses] as readonly Readonly<Record<string, { readonly name?: string }>>[]
+  for (const g of groups) {
+    const name = g[id]?.name
+    if (name) return name
+  }
+  return doc.floors.find((f) => f.id === id)?.name ?? id
 }
 
 /** Start-up document: the autosaved model when there is a valid one, else the demo building. */

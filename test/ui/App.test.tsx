@@ -9,7 +9,8 @@ import { createEditorStore } from '@/editor'
 import type { AnalysisResult } from '@/engine'
 import { CAUTION, CAUTION_SHORT, demoProject } from '@/model'
 import { createAnalysisClient } from '@/ui/analysisClient'
-import { App } from '@/ui/App'
+import { App, recordName } from '@/ui/App'
+import { ProblemsPanel } from '@/ui/ProblemsPanel'
 import { Inspector } from '@/ui/Inspector'
 
 /** A stand-in analysis answer (the engine has its own tests): one mechanism issue. */
@@ -71,5 +72,18 @@ describe('App', () => {
     const us = renderToString(<Inspector {...props} units="US" />)
     expect(us).toMatch(/data-testid="field-thickness" value="9.8"/)
     expect(us).toMatch(/data-testid="field-p1x" value="98.43"/)
+  })
+
+  it('names the elements of a problem by their names, not their ids', () => {
+    const project = demoProject()
+    expect(recordName(project, 'core-s')).toBe('Core south')
+    expect(recordName(project, 'no-such-id')).toBe('no-such-id')
+    const issue = fakeResult().issues[0]
+    if (!issue) throw new Error('no issue')
+    const html = renderToString(
+      <ProblemsPanel issues={[issue]} analysisError={null} notices={[]} onPick={() => undefined} nameOf={(id) => recordName(project, id)} />,
+    )
+    expect(html).toContain('Core south')
+    expect(html.replace(/<[^>]*>/g, '')).not.toContain('core-s')
   })
 })
