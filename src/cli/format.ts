@@ -12,7 +12,7 @@ import type {
   Verdict,
 } from '@/engine'
 import { scopeLine } from '@/engine'
-import { CAUTION, formatNumber, maxOf, toDisplay, unitLabel } from '@/model'
+import { CAUTION, formatNumber, maxOf, MODE_COLUMNS, modeHeaderLabel, toDisplay, unitLabel } from '@/model'
 import type { Quantity, UnitSystem } from '@/model'
 import { designDetailSection, designLeadSection } from './formatDesign'
 
@@ -126,36 +126,26 @@ function floorsSection(result: AnalysisResult, units: UnitSystem): string {
 function modesSection(result: AnalysisResult): string {
   const m = result.modes
   if (!m) return 'Modes: not computed'
-  const columns: Column[] = [
-    { header: 'mode' },
-    { header: 'T (s)' },
-    { header: 'f (Hz)' },
-    { header: 'M_x' },
-    { header: 'M_y' },
-    { header: 'M_rz' },
-    { header: 'sum M_x' },
-    { header: 'sum M_y' },
-    { header: 'sum M_rz' },
-    { header: 'torsion' },
-    { header: 'class', align: 'left' },
-  ]
+  // Gyre's one set of mode headers (src/model/modeHeaders.ts); shares in percent, without the sign.
+  const columns: Column[] = MODE_COLUMNS.map((c) => (c.key === 'class' ? { header: modeHeaderLabel(c), align: 'left' } : { header: modeHeaderLabel(c) }))
+  const share = (ratio: number): string => (Number.isFinite(ratio) ? (100 * ratio).toFixed(1) : '-')
   const rows: string[][] = []
   for (let i = 0; i < m.count; i++) {
     rows.push([
       String(i + 1),
       formatNumber(m.periods[i] ?? Number.NaN, 4),
       formatNumber(m.frequenciesHz[i] ?? Number.NaN, 4),
-      pct(m.effectiveMassRatio.x[i] ?? Number.NaN),
-      pct(m.effectiveMassRatio.y[i] ?? Number.NaN),
-      pct(m.effectiveMassRatio.rz[i] ?? Number.NaN),
-      pct(m.cumulativeMassRatio.x[i] ?? Number.NaN),
-      pct(m.cumulativeMassRatio.y[i] ?? Number.NaN),
-      pct(m.cumulativeMassRatio.rz[i] ?? Number.NaN),
-      pct(m.torsionShare[i] ?? Number.NaN),
+      share(m.effectiveMassRatio.x[i] ?? Number.NaN),
+      share(m.effectiveMassRatio.y[i] ?? Number.NaN),
+      share(m.effectiveMassRatio.rz[i] ?? Number.NaN),
+      share(m.cumulativeMassRatio.x[i] ?? Number.NaN),
+      share(m.cumulativeMassRatio.y[i] ?? Number.NaN),
+      share(m.cumulativeMassRatio.rz[i] ?? Number.NaN),
+      share(m.torsionShare[i] ?? Number.NaN),
       m.character[i] ?? '-',
     ])
   }
-  const head = `Modes (${m.count} of ${m.dofCount}, solver ${m.solver}${m.complete ? '' : ', INCOMPLETE'}; M = effective modal mass ratio, torsion = share of kinetic energy in rotation)`
+  const head = `Modes (${m.count} of ${m.dofCount}, solver ${m.solver}${m.complete ? '' : ', INCOMPLETE'}; share = effective modal mass over total mass, running = sum over this and lower modes, torsion = share of kinetic energy in rotation)`
   return [head, formatTable(columns, rows)].join('\n')
 }
 

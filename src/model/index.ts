@@ -42,6 +42,8 @@ export { createId } from './ids'
 export { computeElevations, contentFloorId, elementFloorRange, floorContent, floorIndex } from './floors'
 export { CAUTION, CAUTION_SHORT } from './caution'
 export { ACI_318_19_FACTORS, STIFFNESS_FACTOR_DEFAULTS } from './stiffnessFactors'
+export { MODE_COLUMNS, modeColumn, modeHeaderLabel } from './modeHeaders'
+export type { ModeColumn, ModeColumnKey } from './modeHeaders'
 export {
   CURRENT_VERSION,
   DEFAULT_SETTINGS,
@@ -59,6 +61,7 @@ export {
   FOOT,
   INCH,
   KIP,
+  LENGTH_UNITS,
   POUND_FORCE,
   QUANTITIES,
   STANDARD_GRAVITY,
@@ -66,11 +69,12 @@ export {
   formatNumber,
   formatQuantity,
   fromDisplay,
+  parseTypedNumber,
   storageUnit,
   toDisplay,
   unitLabel,
 } from './units'
-export type { Quantity, UnitSystem } from './units'
+export type { Quantity, TypedNumber, UnitSystem } from './units'
 export { demoProject } from './demo'
 export {
   ASCE7_SYSTEM_PRESETS,

@@ -173,3 +173,60 @@ export function formatQuantity(valueSI: number, quantity: Quantity, system: Unit
   if (label === '') return text
   return label === '°' ? `${text}°` : `${text} ${label}`
 }
+
+/** Length units a typed entry may carry, metres per unit (NIST SP 811 Appendix B.8; ft and in exact). */
+export const LENGTH_UNITS: Readonly<Record<string, number>> = {
+  mm: 0.001,
+  cm: 0.01,
+  m: 1,
+  in: INCH,
+  '"': INCH,
+  ft: FOOT,
+  "'": FOOT,
+}
+
+/** A typed number: `si` is set when the text named its own length unit (then in metres). */
+export type TypedNumber =
+  | { readonly ok: true; readonly number: number; readonly si: number | null; readonly unit: string | null }
+  | { readonly ok: false; readonly message: string }
+
+const NUM = '([-+]?(?:\\d+(?:[.,]\\d*)?|[.,]\\d+)(?:[eE][-+]?\\d+)?)'
+const FEET_INCHES = new RegExp(`^${NUM}\\s*(?:'|ft)\\s*-?\\s*${NUM}\\s*(?:"|in)$`)
+const WITH_UNIT = new RegExp(`^${NUM}\\s*(mm|cm|m|in|ft|"|')$`, 'i')
+const PLAIN = new RegExp(`^${NUM}$`)
+const toNumber = (s: string): number => Number(s.replace(',', '.'))
+
+/**
+ * Read a number typed into a box, with an optional length unit: "0.25", "300 mm", "0.3 m", "12 in",
+ * "2.5 ft", "6'", "1'-6\"" or "1' 6\"" (feet and inches). A decimal comma is read as a point. Without a
+ * unit the number is returned as typed (the box's own unit applies); with one, `si` is in metres.
+ *
+ * @see NIST Special Publication 811 (2008), Appendix B.8: 1 ft = 0.3048 m, 1 in = 0.0254 m (exact).
+ */
+export function parseTypedNumber(text: string): TypedNumber {
+  const t = text.trim().replace(/\u2032/g, "'").replace(/\u2033/g, '"')
+  if (t === '') return { ok: false, message: 'a number is required' }
+  const plain = PLAIN.exec(t)
+  if (plain?.[1] !== undefined) {
+    const n = toNumber(plain[1])
+    return Number.isFinite(n) ? { ok: true, number: n, si: null, unit: null } : { ok: false, message: `"${t}" is not a number` }
+  }
+  const fi = FEET_INCHES.exec(t)
+  if (fi?.[1] !== undefined && fi[2] !== undefined) {
+    const feet = toNumber(fi[1])
+    const inches = toNumber(fi[2])
+    if (!Number.isFinite(feet) || !Number.isFinite(inches) || inches < 0) return { ok: false, message: `"${t}" is not a feet-and-inches length` }
+    const sign = fi[1].trim().startsWith('-') ? -1 : 1
+    const si = feet * FOOT + sign * inches * INCH
+    return { ok: true, number: si, si, unit: 'ft-in' }
+  }
+  const wu = WITH_UNIT.exec(t)
+  if (wu?.[1] !== undefined && wu[2] !== undefined) {
+    const unit = wu[2].toLowerCase()
+    const factor = LENGTH_UNITS[unit]
+    const n = toNumber(wu[1])
+    if (factor === undefined || !Number.isFinite(n)) return { ok: false, message: `"${t}" is not a number with a unit` }
+    return { ok: true, number: n, si: n * factor, unit }
+  }
+  return { ok: false, message: `"${t}" is not a number (units understood: mm, cm, m, in, ft, and 1'-6")` }
+}

@@ -10,8 +10,8 @@ import type {
   SpectrumFloorResponse,
   Verdict,
 } from '@/engine'
-import { CAUTION, elementFloorRange, toDisplay, unitLabel } from '@/model'
-import type { Project, Quantity, UnitSystem } from '@/model'
+import { CAUTION, elementFloorRange, modeColumn, toDisplay, unitLabel } from '@/model'
+import type { ModeColumnKey, Project, Quantity, UnitSystem } from '@/model'
 import { DESIGN_TABLE_IDS, designBaseShearTable, designDetailTables } from './designTables'
 
 /** One column: a machine key, a short label and the display unit ('' for pure numbers and text). */
@@ -171,19 +171,21 @@ function floorsTable(project: Project, result: AnalysisResult, units: UnitSystem
 function modesTable(result: AnalysisResult): ResultTable | null {
   const m = result.modes
   if (!m) return null
+  // Gyre's one set of mode headers (src/model/modeHeaders.ts); shares here as ratios 0..1 (no unit).
+  const h = (k: ModeColumnKey): string => modeColumn(k).header
   const col = (key: string, label: string, unit = ''): TableColumn => ({ key, label, unit })
   const columns = [
-    col('mode', 'mode'),
-    col('period', 'period T', 's'),
-    col('frequency', 'frequency f', 'Hz'),
-    col('mx', 'mass ratio X'),
-    col('my', 'mass ratio Y'),
-    col('mrz', 'mass ratio RZ'),
-    col('cumX', 'cumulative X'),
-    col('cumY', 'cumulative Y'),
-    col('cumRz', 'cumulative RZ'),
-    col('torsion', 'torsion share'),
-    col('class', 'class'),
+    col('mode', h('mode')),
+    col('period', h('period'), 's'),
+    col('frequency', h('frequency'), 'Hz'),
+    col('mx', h('shareX')),
+    col('my', h('shareY')),
+    col('mrz', h('shareRz')),
+    col('cumX', h('runningX')),
+    col('cumY', h('runningY')),
+    col('cumRz', h('runningRz')),
+    col('torsion', h('torsion')),
+    col('class', h('class')),
   ]
   const rows: TableCell[][] = []
   for (let i = 0; i < m.count; i++) {
@@ -202,8 +204,8 @@ function modesTable(result: AnalysisResult): ResultTable | null {
     ])
   }
   const notes = [
-    'Mass ratios are effective modal mass over total mass (0 to 1) for translation along X and Y and rotation about the building centre of mass (RZ).',
-    'Torsion share: part of the modal kinetic energy in rotation about each floor centre of mass (0 to 1).',
+    'share X, share Y, share θ: effective modal mass over total mass (0 to 1) for translation along X and Y and rotation θ about the building centre of mass; running: the sum over this and all lower modes.',
+    'torsion: part of the modal kinetic energy in rotation about each floor centre of mass (0 to 1).',
     `${m.count} of ${m.dofCount} modes, solver ${m.solver}${m.complete ? '' : ' (incomplete)'}.`,
   ]
   return table('modes', 'Modes: periods, effective masses and torsion share', columns, rows, notes)

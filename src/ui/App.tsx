@@ -33,6 +33,8 @@ import type { Action, ActionContext } from './actions'
 import type { AnalysisClient, AnalysisState } from './analysisClient'
 import type { AutosaveService } from './autosave'
 import { blankProject } from './blankProject'
+import { CentresTable } from './CentresTable'
+import { centresRows } from './centresRows'
 import { ErrorBoundary } from './ErrorBoundary'
 import { FloorStack } from './FloorStack'
 import type { FloorActions } from './FloorStack'
@@ -52,8 +54,13 @@ import { downloadProject, readProjectFile } from './projectFile'
 import { formatQuantity, fromDisplay } from './quantities'
 import { ResultsPanel } from './ResultsPanel'
 import { SaveNotice } from './SaveNotice'
-import { StatusLine } from './StatusLine'
 import { WorkerNotice } from './WorkerNotice'
+import { normaliseNumericText } from './numericText'
+import { ShortcutSheet } from './ShortcutSheet'
+import { StatusLine } from './StatusLine'
+import { LAYOUTS, layoutForKey } from './workbench/layouts'
+import type { LayoutId } from './workbench/layouts'
+import { readStoredLayouts, Workbench } from './workbench/Workbench'
 
 export interface AppProps {
   readonly store: EditorStore
@@ -130,13 +137,20 @@ export function App({ store, analysis, startupNotice = null, viewerInitial, auto
   const state = useAnalysis(analysis)
 
   const [units, setUnits] = useState<UnitSystem>(storedUnits)
+  const [layout, setLayout] = useState<LayoutId>(() => readStoredLayouts().active)
   const [showOverlays, setShowOverlays] = useState(true)
   // Time history is the heaviest stage: run it only while the engineer asks for the ground-motion response.
   const [withMotion, setWithMotion] = useState(false)
   const [fitRequest, setFitRequest] = useState(0)
+  // A new layout resizes the plan pane: fit the plan again once its new size is measured.
+  const chooseLayout = useCallback((id: LayoutId) => {
+    setLayout(id)
+    setFitRequest((n) => n + 1)
+  }, [])
   const [banner, setBanner] = useState<Banner | null>(startupNotice ? { kind: 'info', title: startupNotice, lines: [] } : null)
   const [statusNote, setStatusNote] = useState<string | null>(null)
   const [numericText, setNumericText] = useState('')
+  const [sheetOpen, setSheetOpen] = useState(false)
   const [viewScale, setViewScale] = useState(20)
   const onViewChange = useCallback((v: { scale: number }) => setViewScale(v.scale), [])
   const fileInput = useRef<HTMLInputElement>(null)
@@ -188,7 +202,36 @@ export function App({ store, analysis, startupNotice = null, viewerInitial, auto
   // Keyboard shortcuts from the action table; typing in a field is left alone.
   useEffect(() => {
     const onKey = (e: KeyboardEvent): void => {
+      const mod = e.ctrlKey || e.metaKey
+      // Ctrl+Z / Ctrl+Y in a property box: apply the box (blur commits it), then undo or redo.
+      if (isTyping(e.target) && mod && (e.key.toLowerCase() === 'z' || e.key.toLowerCase() === 'y')) {
+        const box = e.target as HTMLElement
+        if (box.closest('.inspector, .floor-stack')) {
+          e.preventDefault()
+          box.blur()
+          const action = actionForKey(e)
+          if (action?.canRun(ctx)) action.run(ctx)
+        }
+        return
+      }
       if (isTyping(e.target)) return
+      if (e.key === 'Escape') setSheetOpen(false)
+      if (e.key === '?') {
+        e.preventDefault()
+        setSheetOpen((v) => !v)
+        return
+      }
+      // While a segment or outline is being drawn, typed numbers go to the length, angle box.
+      const st = store.getState()
+      if (!mod && !e.altKey && DRAWING_TOOLS.has(st.tool.id) && st.tool.state !== 'idle' && /^[0-9.@<-]$/.test(e.key)) {
+        const input = document.getElementById('numeric-input')
+        if (input instanceof HTMLInputElement) {
+          e.preventDefault()
+          input.focus()
+          setNumericText((t) => t + e.key)
+          return
+        }
+      }
       // While a gesture is in progress Enter and Backspace belong to the tool (finish, drop vertex).
       if ((e.key === 'Enter' || e.key === 'Backspace') && store.getState().tool.state !== 'idle') {
         e.preventDefault()
@@ -201,6 +244,11 @@ export function App({ store, analysis, startupNotice = null, viewerInitial, auto
         if (action.canRun(ctx)) action.run(ctx)
         return
       }
+      const nextLayout = layoutForKey(e)
+      if (nextLayout) {
+        e.preventDefault()
+        chooseLayout(nextLayout)
+      }
     }
     const onBlur = (): void => {
       if (store.getState().tool.state !== 'idle') dispatch(store, { type: 'cancel' })
@@ -211,7 +259,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial, auto
       window.removeEventListener('keydown', onKey)
       window.removeEventListener('blur', onBlur)
     }
-  }, [ctx, store])
+  }, [chooseLayout, ctx, store])
 
   const onOpenChange = async (e: ChangeEvent<HTMLInputElement>): Promise<void> => {
     const file = e.target.files?.[0]
@@ -299,9 +347,11 @@ export function App({ store, analysis, startupNotice = null, viewerInitial, auto
     setSelection(store, issue.refs)
   }
 
+  const nameOf = useCallback((id: string): string => recordName(store.getState().doc, id), [store])
   const scene = useMemo(() => planScene(doc, floorId), [doc, floorId])
   const bounds = useMemo(() => sceneBounds(doc, scene), [doc, scene])
   const overlay = useMemo(() => floorOverlay(state.result, floorId), [state.result, floorId])
+  const centres = useMemo(() => centresRows(doc.floors, state.result), [doc.floors, state.result])
   const handles = useMemo(
     // Slab vertex handles are drawn with the slab itself; the canvas draws the others.
     () =>
@@ -323,7 +373,7 @@ export function App({ store, analysis, startupNotice = null, viewerInitial, auto
   const numericMode = DRAWING_TOOLS.has(tool.id) ? 'length-angle' : tool.id === 'pick' && selection.length > 0 ? 'offset' : null
   const submitNumeric = (): void => {
     if (!numericMode) return
-    const parsed = parseNumericEntry(numericText, numericMode, fromDisplay(1, 'length', units))
+    const parsed = parseNumericEntry(normaliseNumericText(numericText), numericMode, fromDisplay(1, 'length', units))
     if (!parsed.ok) {
       setMessage(store, parsed.message)
       return
@@ -379,10 +429,31 @@ export function App({ store, analysis, startupNotice = null, viewerInitial, auto
             ))}
           </div>
         ))}
+        <div className="group" role="group" aria-label="Layout">
+          {LAYOUTS.map((l) => (
+            <button
+              key={l.id}
+              type="button"
+              data-testid={`layout-${l.id}`}
+              aria-pressed={layout === l.id}
+              title={`${l.hint} (${l.key})`}
+              onClick={() => chooseLayout(l.id)}
+            >
+              {l.label}
+            </button>
+          ))}
+        </div>
         <div className="group" role="group" aria-label="Units">
           {(['SI', 'US'] as const).map((u) => (
-            <button key={u} type="button" data-testid={`units-${u}`} aria-pressed={units === u} onClick={() => setUnits(u)}>
-              {u === 'SI' ? 'SI (kN, m)' : 'US (kip, ft)'}
+            <button
+              key={u}
+              type="button"
+              data-testid={`units-${u}`}
+              aria-pressed={units === u}
+              title={u === 'SI' ? 'SI units: m, mm, kN, t, s (U switches)' : 'US customary units: ft, in, kip, s (U switches)'}
+              onClick={() => setUnits(u)}
+            >
+              {u === 'SI' ? 'Metric' : 'US customary'}
             </button>
           ))}
         </div>
@@ -431,114 +502,125 @@ export function App({ store, analysis, startupNotice = null, viewerInitial, auto
       ) : null}
       <WorkerNotice client={analysis} />
       <SaveNotice status={saving.status} />
-      <div className="workspace">
-        <aside className="side">
+      <Workbench
+        layout={layout}
+        floors={
           <ErrorBoundary name="Floors">
             <MemoFloorStack floors={doc.floors} current={floorId} units={units} onSelect={onSelectFloor} actions={floorActions} />
           </ErrorBoundary>
-        </aside>
-        <main className="center">
-          <div className="views">
-            <ErrorBoundary name="Plan">
-              <div className="plan-wrap" style={{ position: 'relative', minWidth: 0, minHeight: 0, display: 'grid' }}>
-                <PlanCanvas
-                  project={doc}
-                  scene={scene}
-                  bounds={bounds}
-                  units={units}
-                  selection={new Set(selection)}
-                  overlay={overlay}
-                  overlayStale={state.isStale || state.error !== null}
-                  showOverlays={showOverlays}
-                  preview={preview}
-                  snap={snap}
-                  handles={handles}
-                  readout={readout}
-                  fitRequest={fitRequest}
-                  cursor={tool.id === 'pick' ? 'default' : 'crosshair'}
-                  onPointer={onPointer}
-                  onViewChange={onViewChange}
-                />
-                <div className="plan-note" data-testid="plan-floor">
-                  {floor ? `Floor ${floorNumber}: ${floor.name}` : ''}
-                  {scene.slabsLinked ? ' · slabs and masses as typical floor' : ''}
-                </div>
-                {numericMode ? (
-                  <form
-                    className="numeric-entry"
-                    data-testid="numeric-entry"
-                    onSubmit={(e) => {
-                      e.preventDefault()
-                      submitNumeric()
-                    }}
-                  >
-                    <label htmlFor="numeric-input">{numericMode === 'offset' ? 'Move by Δx, Δy' : 'Length, angle°'}</label>
-                    <input
-                      id="numeric-input"
-                      data-testid="numeric-input"
-                      type="text"
-                      value={numericText}
-                      placeholder={numericMode === 'offset' ? (units === 'SI' ? '1.5, 0' : '5, 0') : units === 'SI' ? '6, 90' : '20, 90'}
-                      onChange={(e) => setNumericText(e.target.value)}
-                      onKeyDown={(e) => {
-                        if (e.key === 'Escape') {
-                          setNumericText('')
-                          ;(e.target as HTMLInputElement).blur()
-                        }
-                      }}
-                    />
-                    <button type="submit">Apply</button>
-                  </form>
-                ) : null}
+        }
+        plan={
+          <div className="plan-area">
+          <ErrorBoundary name="Plan">
+            <div className="plan-wrap" style={{ position: 'relative', minWidth: 0, minHeight: 0, display: 'grid' }}>
+              <PlanCanvas
+                project={doc}
+                scene={scene}
+                bounds={bounds}
+                units={units}
+                selection={new Set(selection)}
+                overlay={overlay}
+                overlayStale={state.isStale || state.error !== null}
+                showOverlays={showOverlays}
+                preview={preview}
+                snap={snap}
+                handles={handles}
+                readout={readout}
+                fitRequest={fitRequest}
+                cursor={tool.id === 'pick' ? 'default' : 'crosshair'}
+                onPointer={onPointer}
+                onViewChange={onViewChange}
+              />
+              <div className="plan-note" data-testid="plan-floor">
+                {floor ? `Floor ${floorNumber}: ${floor.name}` : ''}
+                {scene.slabsLinked ? ' · slabs and masses as typical floor' : ''}
               </div>
-            </ErrorBoundary>
-            <div className="viewer-slot">
-              <ErrorBoundary name="3D view">
-                <MemoViewerPane
-                  project={viewerDoc}
-                  result={viewerResult}
-                  isStale={viewerStale}
-                  {...(viewerInitial ? { initial: viewerInitial } : {})}
-                />
-              </ErrorBoundary>
+              {numericMode ? (
+                <form
+                  className="numeric-entry"
+                  data-testid="numeric-entry"
+                  onSubmit={(e) => {
+                    e.preventDefault()
+                    submitNumeric()
+                  }}
+                >
+                  <label htmlFor="numeric-input">{numericMode === 'offset' ? 'Move by Δx, Δy' : 'Length, angle°'}</label>
+                  <input
+                    id="numeric-input"
+                    data-testid="numeric-input"
+                    type="text"
+                    value={numericText}
+                    placeholder={numericMode === 'offset' ? (units === 'SI' ? '1.5, 0' : '5, 0') : units === 'SI' ? '6, 90' : '20, 90'}
+                    onChange={(e) => setNumericText(e.target.value)}
+                    onKeyDown={(e) => {
+                      if (e.key === 'Escape') {
+                        setNumericText('')
+                        ;(e.target as HTMLInputElement).blur()
+                      }
+                    }}
+                  />
+                  <button type="submit">Apply</button>
+                </form>
+              ) : null}
             </div>
+          </ErrorBoundary>
+          <ErrorBoundary name="Centres">
+            <CentresTable rows={centres} currentFloor={floorId} units={units} isStale={viewerStale} onSelectFloor={onSelectFloor} />
+          </ErrorBoundary>
           </div>
-          <div className="lower">
-            <ErrorBoundary name="Problems">
-              <ProblemsPanel issues={issues} analysisError={state.error} notices={message ? [message] : []} onPick={onPickIssue} />
-            </ErrorBoundary>
-            <ErrorBoundary name="Results">
-              <MemoResultsPanel floors={doc.floors} result={viewerResult} isStale={viewerStale} units={units} />
-            </ErrorBoundary>
-          </div>
-        </main>
-        <aside className="side right">
-          <ErrorBoundary name="Inspector">
-            <Inspector
-              project={doc}
-              selection={selection}
-              units={units}
-              onReplace={onReplace}
-              onDelete={() => {
-                const ids = store.getState().selection
-                if (ids.length) run('delete', () => execute(store, 'deleteElements', { ids }))
-              }}
-              onCopyToFloors={onCopyToFloors}
-              copyMessage={null}
+        }
+        model={
+          <ErrorBoundary name="3D view">
+            <MemoViewerPane
+              project={viewerDoc}
+              result={viewerResult}
+              isStale={viewerStale}
+              {...(viewerInitial ? { initial: viewerInitial } : {})}
             />
           </ErrorBoundary>
-          <ErrorBoundary name="Element forces">
-            <ElementForcesPanel floors={doc.floors} result={viewerResult} selection={selection} units={units} isStale={viewerStale} />
+        }
+        problems={
+          <ErrorBoundary name="Problems">
+            <ProblemsPanel issues={issues} analysisError={state.error} notices={message ? [message] : []} onPick={onPickIssue} nameOf={nameOf} />
           </ErrorBoundary>
-          <ErrorBoundary name="Seismic system"><SeismicSystemForm store={store} result={viewerResult} units={units} /></ErrorBoundary>
-          <ErrorBoundary name="Balance">
-            <BalancePanel project={doc} onApply={onApplyBalance} />
+        }
+        results={
+          <ErrorBoundary name="Results">
+            <MemoResultsPanel floors={doc.floors} result={viewerResult} isStale={viewerStale} units={units} />
           </ErrorBoundary>
-          <ErrorBoundary name="Report">
-            <ReportActions project={doc} result={viewerResult} unitSystem={units} />
-          </ErrorBoundary>
-        </aside>
-      </div>
+        }
+        side={
+          <>
+            <ErrorBoundary name="Inspector">
+              <Inspector
+                project={doc}
+                selection={selection}
+                units={units}
+                onReplace={onReplace}
+                onDelete={() => {
+                  const ids = store.getState().selection
+                  if (ids.length) run('delete', () => execute(store, 'deleteElements', { ids }))
+                }}
+                onCopyToFloors={onCopyToFloors}
+                copyMessage={null}
+              />
+            </ErrorBoundary>
+            <ErrorBoundary name="Element forces">
+              <ElementForcesPanel floors={doc.floors} result={viewerResult} selection={selection} units={units} isStale={viewerStale} />
+            </ErrorBoundary>
+            <ErrorBoundary name="Seismic system">
+              <SeismicSystemForm store={store} result={viewerResult} units={units} />
+            </ErrorBoundary>
+            <ErrorBoundary name="Balance">
+              <BalancePanel project={doc} onApply={onApplyBalance} />
+            </ErrorBoundary>
+            <ErrorBoundary name="Report">
+              <ReportActions project={doc} result={viewerResult} unitSystem={units} />
+            </ErrorBoundary>
+          </>
+        }
+      />
+      {sheetOpen ? <ShortcutSheet onClose={() => setSheetOpen(false)} /> : null}
       <StatusLine
         analysis={state}
         message={message ?? statusNote}
@@ -550,6 +632,16 @@ export function App({ store, analysis, startupNotice = null, viewerInitial, auto
       />
     </div>
   )
+}
+
+/** The name of the element, slab, mass or floor with this id; the id when none has it. */
+export function recordName(doc: Project, id: string): string {
+  const groups = [doc.walls, doc.frameLines, doc.columns, doc.slabs, doc.pointMasses, doc.lineMasses] as readonly Readonly<Record<string, { readonly name?: string }>>[]
+  for (const g of groups) {
+    const name = g[id]?.name
+    if (name) return name
+  }
+  return doc.floors.find((f) => f.id === id)?.name ?? id
 }
 
 /** Start-up document: the autosaved model when there is a valid one, else the demo building. */

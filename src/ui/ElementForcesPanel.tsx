@@ -4,7 +4,7 @@
  * the caution. Reads `result.elementForces`; shows nothing when the selection has no such rows.
  */
 import { useState } from 'react'
-import { CAUTION, CAUTION_SHORT, formatQuantity, toDisplay, unitLabel } from '@/model'
+import { formatQuantity, toDisplay, unitLabel } from '@/model'
 import type { Floor, UnitSystem } from '@/model'
 import type { AnalysisResult, ElementForceRow } from '@/engine'
 
@@ -83,9 +83,6 @@ export function ElementForcesPanel({ floors, result, selection, units, isStale }
   return (
     <section className="element-forces" aria-label="Element storey forces" data-testid="element-forces">
       <h3>Storey shear and overturning</h3>
-      <p className="caution" title={CAUTION} data-testid="element-forces-caution">
-        {CAUTION_SHORT}
-      </p>
       {isStale ? <p className="stale-note">Updating — these numbers belong to an earlier state of the model.</p> : null}
       <label>
         Case{' '}

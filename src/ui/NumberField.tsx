@@ -1,6 +1,6 @@
 import { useState } from 'react'
 import type { UnitSystem } from '@/model'
-import { formatNumber, parseDisplayInput, unitSymbol } from './quantities'
+import { formatNumber, implausibility, parseDisplayInput, unitSymbol } from './quantities'
 import type { FieldRule, QuantityKind } from './quantities'
 
 interface Props {
@@ -17,19 +17,24 @@ interface Props {
 }
 
 /**
- * A number in display units. Commits on Enter or leaving the field; Escape restores the model value.
+ * A number in display units, or with its own length unit ("300 mm", "1'-6\""), converted to the box.
+ * Commits on Enter or leaving the field; Escape restores the model value. A value outside the usual
+ * range of the box (e.g. a wall 0.25 mm thick) is asked about once before it is taken.
  * A refused value stays in the box, marked, with the message below; the model is not touched.
  */
 export function NumberField({ label, value, kind, units, rule, testId, onCommit, disabled }: Props) {
   const shown = formatNumber(value, kind, units)
   const [text, setText] = useState(shown)
   const [error, setError] = useState<string | null>(null)
+  // An unusual value is asked about once: the same text committed again is taken.
+  const [warning, setWarning] = useState<{ text: string; message: string } | null>(null)
   // A new model value or unit resets the box during render (no stale frame in between).
   const [prevShown, setPrevShown] = useState(shown)
   if (prevShown !== shown) {
     setPrevShown(shown)
     setText(shown)
     setError(null)
+    setWarning(null)
   }
 
   const commit = (): void => {
@@ -42,6 +47,13 @@ export function NumberField({ label, value, kind, units, rule, testId, onCommit,
       setError(parsed.message)
       return
     }
+    const unusual = implausibility(parsed.value, kind, units)
+    if (unusual && warning?.text !== text) {
+      setError(null)
+      setWarning({ text, message: `${label}: ${unusual}. Press Enter again to keep it.` })
+      return
+    }
+    setWarning(null)
     const refusal = onCommit(parsed.value)
     setError(refusal ? `${label}: ${refusal.replace(/^[^:]*:\s*/, '')}` : null)
   }
@@ -67,11 +79,17 @@ export function NumberField({ label, value, kind, units, rule, testId, onCommit,
               e.stopPropagation()
               setText(shown)
               setError(null)
+              setWarning(null)
             }
           }}
         />
         <span className="unit">{symbol}</span>
       </label>
+      {warning && warning.text === text && !error ? (
+        <p className="warning" role="status" data-testid={`${testId}-warning`}>
+          {warning.message}
+        </p>
+      ) : null}
       {error ? (
         <p className="error" role="alert" data-testid={`${testId}-error`}>
           {error}

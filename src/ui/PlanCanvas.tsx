@@ -7,9 +7,11 @@
 import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react'
 import type { PointerEvent as ReactPointerEvent, ReactNode, WheelEvent as ReactWheelEvent } from 'react'
 import { describeWallGroups } from '@/engine'
-import { CAUTION_SHORT, maxOf, minOf } from '@/model'
+import { maxOf, minOf } from '@/model'
 import type { Point, Project, UnitSystem } from '@/model'
 import type { FloorOverlay } from './floorOverlay'
+import { markerTip } from './markerTip'
+import { PlanKey } from './PlanKey'
 import type { PlanScene } from './planScene'
 import { backgroundStep, fitView, panBy, polygonPath, toPlan, toScreen, wallOutline, zoomAt } from './planView'
 import type { Box, PlanView, ScreenSize } from './planView'
@@ -82,6 +84,7 @@ export function PlanCanvas(props: Props) {
   const groups = useMemo(() => describeWallGroups(project), [project])
   const [view, setView] = useState<PlanView>(() => fitView(bounds, { width: 800, height: 600 }))
   const [hover, setHover] = useState<Point | null>(null)
+  const [tip, setTip] = useState<'cm' | 'cr' | null>(null)
   const panning = useRef<{ x: number; y: number } | null>(null)
   const spaceDown = useRef(false)
   const fitted = useRef<{ request: number; real: boolean } | null>(null)
@@ -416,24 +419,59 @@ export function PlanCanvas(props: Props) {
     const { centreOfMass: cm, centreOfRigidity: cr } = overlay
     if (cm && overlay.radiusOfGyration !== null) {
       const s = S(cm)
-      ov.push(<circle key="ls" className="ring ring-ls" data-testid="circle-ls" cx={s.x} cy={s.y} r={overlay.radiusOfGyration * view.scale} />)
+      const r = overlay.radiusOfGyration * view.scale
+      ov.push(<circle key="ls" className="ring ring-ls" data-testid="circle-ls" cx={s.x} cy={s.y} r={r} />)
+      ov.push(
+        <text key="ls-label" className="ring-label ring-label-ls" data-testid="label-ls" x={s.x} y={s.y - r - 4} textAnchor="middle">
+          l_s {formatQuantity(overlay.radiusOfGyration, 'length', units, 1)}
+        </text>,
+      )
     }
     if (cr && overlay.torsionalRadius) {
       const s = S(cr)
       const { x: rx, y: ry } = overlay.torsionalRadius
-      if (Number.isFinite(rx)) ov.push(<circle key="rx" className="ring ring-rx" data-testid="circle-rx" cx={s.x} cy={s.y} r={rx * view.scale} />)
-      if (Number.isFinite(ry)) ov.push(<circle key="ry" className="ring ring-ry" data-testid="circle-ry" cx={s.x} cy={s.y} r={ry * view.scale} />)
+      if (Number.isFinite(rx)) {
+        ov.push(<circle key="rx" className="ring ring-rx" data-testid="circle-rx" cx={s.x} cy={s.y} r={rx * view.scale} />)
+        ov.push(
+          <text key="rx-label" className="ring-label ring-label-r" data-testid="label-rx" x={s.x + rx * view.scale + 4} y={s.y - 3}>
+            r_x {formatQuantity(rx, 'length', units, 1)}
+          </text>,
+        )
+      }
+      if (Number.isFinite(ry)) {
+        ov.push(<circle key="ry" className="ring ring-ry" data-testid="circle-ry" cx={s.x} cy={s.y} r={ry * view.scale} />)
+        ov.push(
+          <text key="ry-label" className="ring-label ring-label-r" data-testid="label-ry" x={s.x} y={s.y + ry * view.scale + 13} textAnchor="middle">
+            r_y {formatQuantity(ry, 'length', units, 1)}
+          </text>,
+        )
+      }
     }
     if (cm && cr) {
       const a = S(cm)
       const b = S(cr)
       ov.push(<line key="ecc" className="ecc-vector" data-testid="ecc-vector" x1={a.x} y1={a.y} x2={b.x} y2={b.y} markerEnd="url(#ecc-head)" />)
+      if (Math.hypot(b.x - a.x, b.y - a.y) > 24) {
+        ov.push(
+          <text key="ecc-label" className="ring-label ecc-label" data-testid="label-ecc" x={(a.x + b.x) / 2 + 6} y={(a.y + b.y) / 2 - 4}>
+            e {formatQuantity(Math.hypot(cr.x - cm.x, cr.y - cm.y), 'length', units, 1)}
+          </text>,
+        )
+      }
     }
     if (cm) {
       const s = S(cm)
       ov.push(
-        <g key="cm" className="marker marker-cm" data-testid="marker-cm" data-x={cm.x} data-y={cm.y} transform={`translate(${s.x} ${s.y})`}>
-          <title>Centre of mass</title>
+        <g
+          key="cm"
+          className="marker marker-cm"
+          data-testid="marker-cm"
+          data-x={cm.x}
+          data-y={cm.y}
+          transform={`translate(${s.x} ${s.y})`}
+          onPointerEnter={() => setTip('cm')}
+          onPointerLeave={() => setTip(null)}
+        >
           <circle r={9} className="cm-ring" />
           <circle r={4} className="cm-core" />
           <text x={12} y={-10}>CM</text>
@@ -443,8 +481,16 @@ export function PlanCanvas(props: Props) {
     if (cr) {
       const s = S(cr)
       ov.push(
-        <g key="cr" className="marker marker-cr" data-testid="marker-cr" data-x={cr.x} data-y={cr.y} transform={`translate(${s.x} ${s.y})`}>
-          <title>Centre of rigidity</title>
+        <g
+          key="cr"
+          className="marker marker-cr"
+          data-testid="marker-cr"
+          data-x={cr.x}
+          data-y={cr.y}
+          transform={`translate(${s.x} ${s.y})`}
+          onPointerEnter={() => setTip('cr')}
+          onPointerLeave={() => setTip(null)}
+        >
           <path d="M0 -11 L10 7 L-10 7 Z" className="cr-body" />
           <circle r={2.5} className="cr-core" />
           <text x={12} y={16}>CR</text>
@@ -508,6 +554,8 @@ export function PlanCanvas(props: Props) {
   }
 
   const badge = overlay.worstDrift
+  const tipPoint = tip === 'cm' ? overlay.centreOfMass : tip === 'cr' ? overlay.centreOfRigidity : null
+  const tipAt = tipPoint ? S(tipPoint) : null
   return (
     <div className="plan-host" ref={hostRef}>
       <svg
@@ -554,9 +602,19 @@ export function PlanCanvas(props: Props) {
           <strong>max/avg drift {badge.ratio.toFixed(2)}</strong> ({badge.caseId})
           {badge.verdict ? <span className={`verdict verdict-${badge.verdict}`}> {badge.verdict}</span> : null}
           {badge.limit !== null && Number.isFinite(badge.limit) ? <span> · limit {badge.limit.toFixed(2)}</span> : null}
-          <div className="caution small">{CAUTION_SHORT}</div>
         </div>
       ) : null}
+      {props.showOverlays && tipAt && tip ? (
+        <div className="marker-tip" data-testid={`tip-${tip}`} role="tooltip" style={{ left: tipAt.x + 14, top: tipAt.y + 14 }}>
+          {markerTip(tip, overlay, units).map((line) => (
+            <div key={line}>{line}</div>
+          ))}
+        </div>
+      ) : null}
+      <details className="plan-key" data-testid="plan-key-toggle">
+        <summary>Key</summary>
+        <PlanKey />
+      </details>
       {hover ? (
         <div className="coords" data-testid="pointer-coords">
           x {formatQuantity(hover.x, 'length', units)} · y {formatQuantity(hover.y, 'length', units)}

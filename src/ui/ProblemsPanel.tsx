@@ -7,10 +7,12 @@ interface Props {
   /** Messages about files and autosave. */
   readonly notices: readonly string[]
   readonly onPick: (issue: Issue) => void
+  /** The name the engineer gave an element or floor id (the id itself when it has none). */
+  readonly nameOf?: (id: string) => string
 }
 
 /** Engine issues (mechanisms, missing mass, ...) and analysis errors; clicking selects the elements. */
-export function ProblemsPanel({ issues, analysisError, notices, onPick }: Props) {
+export function ProblemsPanel({ issues, analysisError, notices, onPick, nameOf = (id) => id }: Props) {
   const count = issues.length + (analysisError ? 1 : 0)
   return (
     <section className="problems" aria-label="Problems" data-testid="problems-panel">
@@ -35,7 +37,7 @@ export function ProblemsPanel({ issues, analysisError, notices, onPick }: Props)
               title={issue.refs.length ? 'Select the elements involved' : undefined}
             >
               <span className="sev">{issue.severity}</span> {issue.message}
-              {issue.refs.length ? <span className="refs"> ({issue.refs.join(', ')})</span> : null}
+              {issue.refs.length ? <span className="refs"> ({issue.refs.map(nameOf).join(', ')})</span> : null}
             </button>
           </li>
         ))}

@@ -11,8 +11,6 @@ import type { EditorStore } from '@/editor'
 import type { AnalysisResult } from '@/engine'
 import {
   ASCE7_SYSTEM_PRESETS,
-  CAUTION,
-  CAUTION_SHORT,
   DEFAULT_TORSIONAL_FLEXIBILITY_LIMIT,
   EN1998_SYSTEM_PRESETS,
   formatNumber,
@@ -27,7 +25,6 @@ import type {
   SeismicDesign,
   UnitSystem,
 } from '@/model'
-import { CautionNote } from './extras/CautionNote'
 import { useEditor } from './hooks/useEditor'
 import './seismicForm.css'
 
@@ -200,7 +197,6 @@ export function SeismicSystemFormView({ settings, result, units, message, onDesi
               {design.code === 'asce7-16' ? 'Cs' : 'Sd'} {formatNumber(e.coefficient, 3)}; V {formatQuantity(e.baseShear, 'force', units)}
             </p>
           ))}
-          <CautionNote short={CAUTION_SHORT} full={CAUTION} testId="seismic-caution" />
         </div>
       ) : null}
     </details>

@@ -12,7 +12,10 @@ interface Props {
   readonly selectionCount: number
 }
 
-/** One line at the bottom: tool, floor, selection, analysis state, autosave, and the short caution. */
+/**
+ * One line at the bottom: tool, floor, selection, analysis state, autosave, and the screen's one
+ * caution (short text, full text on hover). Panels do not repeat it; exports carry their own.
+ */
 export function StatusLine({ analysis, message, autosavedAt, autosaveProblem = null, floorLabel, toolLabel, selectionCount }: Props) {
   const state = analysis.error
     ? 'failed'
@@ -46,7 +49,7 @@ export function StatusLine({ analysis, message, autosavedAt, autosaveProblem = n
         {autosaveProblem ? `autosave ${autosaveProblem}` : autosavedAt ? `autosaved ${autosavedAt.slice(11, 19)}` : 'not yet autosaved'}
       </span>
       {message ? <span data-testid="status-message">{message}</span> : null}
-      <span className="caution" title={CAUTION}>
+      <span className="caution" role="note" title={CAUTION} data-testid="screen-caution">
         {CAUTION_SHORT}
       </span>
     </footer>

@@ -42,9 +42,11 @@ export function floorOverlay(result: AnalysisResult | null, floorId: string): Fl
     const pick = driftRows.find((r) => r.caseId === worst?.caseId) ?? driftRows[0] ?? null
     if (pick) worst = { ...worst, verdict: pick.verdict, limit: pick.limit }
   }
-  const ls = centres?.radiusOfGyration ?? floor?.radiusOfGyration ?? null
+  // A floor without mass has no centre of mass to draw (and no radius of gyration).
+  const massless = floor !== undefined && !(Number.isFinite(floor.mass) && floor.mass > 0)
+  const ls = massless ? null : (centres?.radiusOfGyration ?? floor?.radiusOfGyration ?? null)
   return {
-    centreOfMass: finitePoint(centres?.centreOfMass ?? floor?.centreOfMass),
+    centreOfMass: massless ? null : finitePoint(centres?.centreOfMass ?? floor?.centreOfMass),
     centreOfRigidity: finitePoint(centres?.centreOfRigidity),
     eccentricity: centres ? centres.eccentricity : null,
     torsionalRadius: centres ? centres.torsionalRadius : null,

@@ -3,7 +3,7 @@
  * `@/model` units) with a fixed number of decimals, so columns of numbers line up. Parsing a typed value
  * converts back to SI and validates it, naming the field in the message.
  */
-import { fromDisplay as modelFromDisplay, unitLabel } from '@/model'
+import { fromDisplay as modelFromDisplay, parseTypedNumber, unitLabel } from '@/model'
 import type { Quantity, UnitSystem } from '@/model'
 
 export type QuantityKind =
@@ -90,6 +90,27 @@ export function formatQuantity(si: number, kind: QuantityKind, system: UnitSyste
   return symbol ? (symbol === '°' ? `${text}°` : `${text} ${symbol}`) : text
 }
 
+/** Boxes that hold a length and so accept a typed length unit ("300 mm", "1'-6\""). */
+const LENGTH_KINDS: ReadonlySet<QuantityKind> = new Set<QuantityKind>(['length', 'elevation', 'thickness', 'displacement'])
+
+/** Usual ranges (SI) of some boxes; a value outside is asked about once before it is taken. Common practice. */
+const PLAUSIBLE: Partial<Record<QuantityKind, { readonly min: number; readonly max: number; readonly what: string }>> = {
+  thickness: { min: 0.05, max: 3, what: 'wall thickness' },
+  length: { min: 0.01, max: 2000, what: 'length' },
+}
+
+/**
+ * A warning when an accepted value lies outside the usual range of its box (e.g. a wall 0.25 mm
+ * thick, typed as "0.25" in a mm box), else null. Ranges are common practice, not code limits.
+ */
+export function implausibility(si: number, kind: QuantityKind, system: UnitSystem): string | null {
+  const p = PLAUSIBLE[kind]
+  if (!p || !Number.isFinite(si) || si === 0) return null
+  const a = Math.abs(si)
+  if (a >= p.min && a <= p.max) return null
+  return `${formatQuantity(si, kind, system, a < p.min ? 3 : undefined)} is unusual for a ${p.what} (usually ${formatQuantity(p.min, kind, system)} to ${formatQuantity(p.max, kind, system)})`
+}
+
 /** Constraint on a typed value (in SI). */
 export interface FieldRule {
   readonly min?: number
@@ -112,11 +133,13 @@ export function parseDisplayInput(
   system: UnitSystem,
   rule: FieldRule = {},
 ): ParsedInput {
-  const trimmed = text.trim().replace(',', '.')
-  if (trimmed === '') return { ok: false, message: `${label}: a number is required` }
-  const value = Number(trimmed)
-  if (!Number.isFinite(value)) return { ok: false, message: `${label}: "${text.trim()}" is not a number` }
-  const si = fromDisplay(value, kind, system)
+  const typed = parseTypedNumber(text)
+  if (!typed.ok) return { ok: false, message: `${label}: ${typed.message}` }
+  if (typed.si !== null && !LENGTH_KINDS.has(kind)) {
+    return { ok: false, message: `${label}: a length unit (${typed.unit}) does not fit here; type the number in ${unitSymbol(kind, system) || 'plain numbers'}` }
+  }
+  const value = typed.si !== null ? toDisplay(typed.si, kind, system) : typed.number
+  const si = typed.si ?? fromDisplay(value, kind, system)
   const limit = (x: number): string => formatQuantity(x, kind, system)
   if (rule.integer && !Number.isInteger(value)) return { ok: false, message: `${label}: must be a whole number` }
   if (rule.min !== undefined) {

@@ -3,7 +3,7 @@ import { advance } from '@react-three/fiber'
 import type { RootState } from '@react-three/fiber'
 import { useStore } from 'zustand'
 import type { AnalysisResult } from '@/engine'
-import { CAUTION, CAUTION_SHORT } from '@/model'
+import { CAUTION, CAUTION_SHORT, MODE_COLUMNS, modeHeaderLabel } from '@/model'
 import type { Point, Project } from '@/model'
 import { layoutBuilding } from './buildingLayout'
 import type { FloorMarks } from './BuildingInstance'
@@ -286,58 +286,59 @@ export function ViewerPane(props: ViewerPaneProps) {
         <PresentationBar store={store} state={state} rows={rows.length} />
       )}
       <div className="gyre-viewer-stage">
-        {glProblem ? (
-          <ViewerUnavailable reason={glProblem} />
-        ) : (
-          <ViewerErrorBoundary resetKey={layout}>
-            <ViewerCanvas
-              layout={layout}
-              motionA={motionA}
-              motionB={motionB}
-              marks={marks}
-              store={store}
-              clock={clock}
-              capture={capture}
-              onFrame={onFrame}
-              transformsA={transformsA}
-              rootState={rootState}
-              {...(onFrameRendered ? { onFrameRendered } : {})}
-            />
-          </ViewerErrorBoundary>
-        )}
-        {banner && (
-          <div className="gyre-viewer-banner" data-testid="viewer-banner">
-            {banner}
+        {/* The legend and plan trace sit beside the canvas, never over the building. */}
+        <div className="gyre-viewer-stage-inner">
+          <div className="gyre-viewer-canvas-box" data-testid="viewer-canvas-box">
+            {glProblem ? (
+              <ViewerUnavailable reason={glProblem} />
+            ) : (
+              <ViewerErrorBoundary resetKey={layout}>
+                <ViewerCanvas
+                  layout={layout}
+                  motionA={motionA}
+                  motionB={motionB}
+                  marks={marks}
+                  store={store}
+                  clock={clock}
+                  capture={capture}
+                  onFrame={onFrame}
+                  transformsA={transformsA}
+                  rootState={rootState}
+                  {...(onFrameRendered ? { onFrameRendered } : {})}
+                />
+              </ViewerErrorBoundary>
+            )}
+            {banner && (
+              <div className="gyre-viewer-banner" data-testid="viewer-banner">
+                {banner}
+              </div>
+            )}
           </div>
-        )}
-        <Legend motion={motionA} colourBy={state.colourBy} amplitude={state.amplitude} />
-        {state.showTrace && (
-          <PlanTrace
-            layout={layout}
-            motion={motionA}
-            marks={marks}
-            store={store}
-            onFrame={onFrame}
-            transforms={transformsA}
-          />
-        )}
+          <div className="gyre-viewer-aside" data-testid="viewer-aside">
+            <Legend motion={motionA} colourBy={state.colourBy} amplitude={state.amplitude} />
+            {state.showTrace && (
+              <PlanTrace
+                layout={layout}
+                motion={motionA}
+                marks={marks}
+                store={store}
+                onFrame={onFrame}
+                transforms={transformsA}
+              />
+            )}
+          </div>
+        </div>
       </div>
       {rows.length > 0 && (
         <div className="gyre-modes">
           <table data-testid="mode-table">
             <thead>
               <tr>
-                <th>Mode</th>
-                <th>T (s)</th>
-                <th>f (Hz)</th>
-                <th title="Effective modal mass ratio along X">X %</th>
-                <th title="Effective modal mass ratio along Y">Y %</th>
-                <th title="Effective modal mass ratio in rotation about the building centre of mass">Rot %</th>
-                <th>ΣX %</th>
-                <th>ΣY %</th>
-                <th>ΣRot %</th>
-                <th title="Share of the kinetic energy in rotation about each floor's centre of mass">Torsion %</th>
-                <th>Class</th>
+                {MODE_COLUMNS.map((c) => (
+                  <th key={c.key} title={c.hint}>
+                    {modeHeaderLabel(c)}
+                  </th>
+                ))}
               </tr>
             </thead>
             <tbody>
@@ -368,9 +369,12 @@ export function ViewerPane(props: ViewerPaneProps) {
       <p className="gyre-viewer-status" data-testid="viewer-status" role="status">
         {state.message}
       </p>
-      <p className="gyre-viewer-caution" data-testid="viewer-caution">
-        {state.presenting ? CAUTION : CAUTION_SHORT}
-      </p>
+      {/* Full window covers the app's caution line: the presentation says it itself. */}
+      {state.presenting ? (
+        <p className="gyre-viewer-caution" data-testid="viewer-caution">
+          {CAUTION}
+        </p>
+      ) : null}
     </section>
   )
 }

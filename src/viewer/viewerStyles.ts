@@ -13,21 +13,25 @@ export const VIEWER_CSS = `
 .gyre-viewer select { font: inherit; max-width: 9em; }
 .gyre-viewer-stage { position: relative; flex: 1 1 auto; min-height: 180px; container-type: size; border: 1px solid #c9c3b6;
   background: #ebe8e1; overflow: hidden; }
-.gyre-viewer-stage > div:first-child { position: absolute !important; inset: 0; }
+.gyre-viewer-stage-inner { position: absolute; inset: 0; display: flex; flex-direction: row; }
+.gyre-viewer-canvas-box { position: relative; flex: 1 1 auto; min-width: 0; min-height: 0; }
+.gyre-viewer-canvas-box > div:first-child { position: absolute !important; inset: 0; }
+.gyre-viewer-aside { flex: 0 0 auto; width: clamp(96px, 24cqw, 230px); display: flex; flex-direction: column; gap: 6px;
+  padding: 4px; overflow: auto; background: #f4f2ed; border-left: 1px solid #c9c3b6; }
+.gyre-viewer-aside:empty { display: none; }
+@container (max-height: 260px) { .gyre-viewer-aside { flex-direction: row; } }
 .gyre-viewer-banner { position: absolute; top: 6px; left: 6px; right: 6px; padding: 3px 8px;
   background: rgba(224, 138, 60, 0.92); color: #1f2630; border-radius: 3px; z-index: 2; }
 .gyre-legend, .gyre-trace, .gyre-viewer select, .gyre-viewer input { color: #1f2630; }
-.gyre-legend { position: absolute; left: 6px; bottom: 6px; background: rgba(251, 250, 246, 0.9);
-  padding: 3px 6px; border-radius: 3px; z-index: 2; max-width: min(260px, 48cqw); font-size: 11px; }
-.gyre-legend-bar { height: 9px; width: 100%; min-width: 100px; border-radius: 2px; }
+.gyre-legend { background: #fbfaf6; padding: 3px 6px; border-radius: 3px; font-size: 11px; }
+.gyre-legend-bar { height: 9px; width: 100%; border-radius: 2px; }
 .gyre-legend-ticks { display: flex; justify-content: space-between; gap: 4px; font-size: 10px; }
 .gyre-legend-keys { font-size: 11px; margin-top: 2px; }
 .gyre-legend-keys i { display: inline-block; width: 9px; height: 9px; margin: 0 3px 0 6px; vertical-align: -1px; }
-.gyre-trace { position: absolute; right: 6px; bottom: 6px; margin: 0; background: rgba(251, 250, 246, 0.92);
-  border-radius: 3px; padding: 4px; z-index: 2; font-size: 11px; }
-.gyre-trace svg { display: block; width: clamp(80px, 34cqw, 220px); height: auto; }
-.gyre-trace figcaption { max-width: clamp(80px, 34cqw, 220px); font-size: 10px; }
-@container (max-width: 480px) { .gyre-legend-keys, .gyre-trace figcaption { display: none; } }
+.gyre-trace { margin: 0; background: #fbfaf6; border-radius: 3px; padding: 4px; font-size: 11px; }
+.gyre-trace svg { display: block; width: 100%; max-height: 60cqh; height: auto; }
+.gyre-trace figcaption { font-size: 10px; }
+@container (max-width: 420px) { .gyre-legend-keys, .gyre-trace figcaption { display: none; } }
 .gyre-trace-rest { fill: #ddd8cc; stroke: #6b6558; stroke-width: 1; stroke-dasharray: 3 2; }
 .gyre-trace-hole { fill: #fbfaf6; stroke: #6b6558; stroke-width: 0.8; }
 .gyre-trace-extreme { fill: none; stroke: #a8322a; stroke-width: 1; stroke-dasharray: 5 3; }
@@ -36,7 +40,7 @@ export const VIEWER_CSS = `
 .gyre-trace-cm { fill: #6b3fa0; }
 .gyre-trace-cr { fill: #14806b; }
 .gyre-trace-centre line { stroke: #a8322a; stroke-width: 2; }
-.gyre-modes { flex: 0 0 auto; max-height: 32%; min-height: 64px; overflow: auto; border: 1px solid #c9c3b6; background: #fbfaf6; }
+.gyre-modes { flex: 0 0 auto; max-height: min(30%, 10em); min-height: 64px; overflow: auto; border: 1px solid #c9c3b6; background: #fbfaf6; }
 .gyre-modes table { border-collapse: collapse; width: 100%; font-variant-numeric: tabular-nums; }
 .gyre-modes th, .gyre-modes td { padding: 1px 5px; text-align: right; white-space: nowrap; }
 .gyre-modes th { position: sticky; top: 0; background: #e4e0d6; font-weight: 600; }
@@ -60,7 +64,7 @@ export const VIEWER_CSS = `
 .gyre-viewer--presenting .gyre-viewer-stage { border-color: #2b3a55; }
 .gyre-viewer--presenting button { font-size: 16px; padding: 4px 12px; }
 .gyre-viewer--presenting .gyre-viewer-caution { font-size: 15px; color: #f2d58c; }
-.gyre-viewer--presenting .gyre-trace svg { width: clamp(120px, 26cqw, 340px); }
+.gyre-viewer--presenting .gyre-viewer-aside { width: clamp(160px, 22cqw, 340px); background: #181e29; border-color: #2b3a55; }
 .gyre-viewer--presenting .gyre-legend { font-size: 14px; }
 .gyre-viewer--presenting .gyre-viewer-stage { min-height: 0; }
 .gyre-viewer--presenting .gyre-viewer-status { color: #b9c3cf; }

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { formatResultJson, formatSummary, formatTable } from '@/cli/format'
 import type { AnalysisResult, ModalResult } from '@/engine'
-import { CAUTION } from '@/model'
+import { CAUTION, MODE_COLUMNS, modeHeaderLabel } from '@/model'
 
 /**
  * A hand-made result of a one-storey box (10 m x 6 m, 36 t; see public/examples/eccentric-box.json
@@ -167,10 +167,16 @@ describe('formatSummary', () => {
     expect(text).toContain(`Overall: FAIL (${CAUTION})`)
   })
 
-  it('shows the modes with mass ratios as percentages', () => {
-    const row = formatSummary(handResult()).split('\n').find((l) => l.trim().startsWith('3 ') && l.includes('torsion'))
+  it('shows the modes with mass shares in percent under the shared mode headers', () => {
+    const lines = formatSummary(handResult()).split('\n')
+    const row = lines.find((l) => l.trim().startsWith('3 ') && l.includes('torsion'))
     // T = 2 pi / omega = 2 pi / 160 = 0.03927 s
-    expect(row?.trim().split(/\s+/)).toEqual(['3', '0.03927', '25.46', '10.0%', '0.0%', '90.0%', '100.0%', '100.0%', '100.0%', '88.0%', 'torsion'])
+    expect(row?.trim().split(/\s+/)).toEqual(['3', '0.03927', '25.46', '10.0', '0.0', '90.0', '100.0', '100.0', '100.0', '88.0', 'torsion'])
+    const header = lines.find((l) => l.trim().startsWith('mode '))
+    const expected = MODE_COLUMNS.map((c) => modeHeaderLabel(c))
+    expect(header?.trim().split(/ {2,}/)).toEqual(expected)
+    expect(expected).toContain('share θ (%)')
+    expect(expected).toContain('running X (%)')
   })
 })
 

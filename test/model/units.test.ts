@@ -9,6 +9,7 @@ import {
   formatNumber,
   formatQuantity,
   fromDisplay,
+  parseTypedNumber,
   toDisplay,
   unitLabel,
 } from '@/model/units'
@@ -114,5 +115,38 @@ describe('formatQuantity', () => {
     expect(formatQuantity(0.25, 'thickness', 'SI')).toBe('250 mm')
     expect(formatQuantity(Math.PI / 6, 'angle', 'SI')).toBe('30°')
     expect(formatQuantity(1.2345, 'ratio', 'SI', 3)).toBe('1.23')
+  })
+})
+
+describe('parseTypedNumber', () => {
+  it('reads numbers with and without a unit into metres with the NIST SP 811 factors', () => {
+    // NIST SP 811 (2008) Appendix B.8: 1 in = 0.0254 m and 1 ft = 0.3048 m exactly; mm, cm by SI prefix.
+    const si = (t: string): number | null => {
+      const r = parseTypedNumber(t)
+      return r.ok ? r.si : Number.NaN
+    }
+    expect(si('300 mm')).toBeCloseTo(0.3, 15)
+    expect(si('30cm')).toBeCloseTo(0.3, 15)
+    expect(si('0.3 m')).toBe(0.3)
+    expect(si('12 in')).toBeCloseTo(0.3048, 15)
+    expect(si('12"')).toBeCloseTo(0.3048, 15)
+    expect(si('2.5 ft')).toBeCloseTo(0.762, 15)
+    expect(si("6'")).toBeCloseTo(1.8288, 15)
+    expect(si("1'-6\"")).toBeCloseTo(0.4572, 15)
+    expect(si("1' 6\"")).toBeCloseTo(0.4572, 15)
+    expect(si('1 ft 6 in')).toBeCloseTo(0.4572, 15)
+    expect(si('0,25 m')).toBe(0.25)
+    expect(si('0.25')).toBeNull()
+    const bare = parseTypedNumber(' 0,25 ')
+    expect(bare.ok && bare.number).toBe(0.25)
+  })
+
+  it('refuses text that is no number or carries an unknown unit, naming what it understands', () => {
+    for (const t of ['', 'abc', '3 kg', '1\'-"', '--2', '1..2 m']) {
+      const r = parseTypedNumber(t)
+      expect(r.ok, t).toBe(false)
+    }
+    const r = parseTypedNumber('3 yd')
+    expect(!r.ok && r.message).toMatch(/units understood: mm, cm, m, in, ft/)
   })
 })

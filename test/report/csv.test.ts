@@ -207,7 +207,7 @@ describe('toCsv', () => {
     const modes = buildResultTables(project, result, 'SI').find((t) => t.id === 'modes')
     if (!modes) throw new Error('no modes table')
     const records = parseRfc4180(toCsv(modes, project))
-    expect(records[1]?.[1]).toBe('period T (s)')
+    expect(records[1]?.[1]).toBe('T (s)')
     expect(Number(records[2]?.[1])).toBe(result.modes?.periods[0])
     expect(records.length).toBe(2 + (result.modes?.count ?? 0))
   })

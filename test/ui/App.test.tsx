@@ -9,7 +9,8 @@ import { createEditorStore } from '@/editor'
 import type { AnalysisResult } from '@/engine'
 import { CAUTION, CAUTION_SHORT, demoProject } from '@/model'
 import { createAnalysisClient } from '@/ui/analysisClient'
-import { App } from '@/ui/App'
+import { App, recordName } from '@/ui/App'
+import { ProblemsPanel } from '@/ui/ProblemsPanel'
 import { Inspector } from '@/ui/Inspector'
 
 /** A stand-in analysis answer (the engine has its own tests): one mechanism issue. */
@@ -54,10 +55,11 @@ describe('App', () => {
     }
   })
 
-  it('shows the full caution with the results and the short one in the status line', () => {
+  it('shows one caution line on the screen: the short text, the full text on hover', () => {
     const html = render()
-    expect(html).toContain(CAUTION)
-    expect(html).toContain(CAUTION_SHORT)
+    expect(count(html, CAUTION_SHORT)).toBe(1)
+    expect(count(html, CAUTION)).toBe(1)
+    expect(html).toMatch(new RegExp(`data-testid="screen-caution"[^>]*>${CAUTION_SHORT.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}<`))
   })
 
   it('shows the inspector fields of a selected wall in display units', () => {
@@ -85,5 +87,18 @@ describe('App', () => {
     expect(core).toContain('data-testid="field-joins"')
     const gable = renderToString(<Inspector {...props} selection={['gable-e']} />)
     expect(gable).toContain('Acts alone')
+  })
+
+  it('names the elements of a problem by their names, not their ids', () => {
+    const project = demoProject()
+    expect(recordName(project, 'core-s')).toBe('Core south')
+    expect(recordName(project, 'no-such-id')).toBe('no-such-id')
+    const issue = fakeResult().issues[0]
+    if (!issue) throw new Error('no issue')
+    const html = renderToString(
+      <ProblemsPanel issues={[issue]} analysisError={null} notices={[]} onPick={() => undefined} nameOf={(id) => recordName(project, id)} />,
+    )
+    expect(html).toContain('Core south')
+    expect(html.replace(/<[^>]*>/g, '')).not.toContain('core-s')
   })
 })

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { formatQuantity, fromDisplay, parseDisplayInput, toDisplay } from '@/ui/quantities'
+import { formatQuantity, fromDisplay, implausibility, parseDisplayInput, toDisplay } from '@/ui/quantities'
 
 describe('toDisplay / fromDisplay', () => {
   it('converts lengths with the exact international foot', () => {
@@ -44,6 +44,35 @@ describe('parseDisplayInput', () => {
 
   it('refuses text that is not a number', () => {
     const r = parseDisplayInput('abc', 'Height', 'length', 'SI')
-    expect(r).toEqual({ ok: false, message: 'Height: "abc" is not a number' })
+    expect(r.ok).toBe(false)
+    if (!r.ok) expect(r.message).toMatch(/^Height: "abc" is not a number/)
+  })
+
+  it('takes a typed length unit in any length box and converts it to the box', () => {
+    // NIST SP 811 Appendix B.8: 1 in = 0.0254 m, 1 ft = 0.3048 m (exact).
+    expect(parseDisplayInput('300 mm', 'Thickness', 'thickness', 'SI')).toEqual({ ok: true, value: 0.3 })
+    expect(parseDisplayInput('0.3 m', 'Thickness', 'thickness', 'SI')).toEqual({ ok: true, value: 0.3 })
+    const inch = parseDisplayInput('12 in', 'Thickness', 'thickness', 'SI')
+    expect(inch.ok && inch.value).toBeCloseTo(0.3048, 12)
+    const fi = parseDisplayInput('1\'-6"', 'Length', 'length', 'US')
+    expect(fi.ok && fi.value).toBeCloseTo(0.4572, 12)
+    // A bare number keeps the box's unit: 250 in a mm box is 0.25 m.
+    expect(parseDisplayInput('250', 'Thickness', 'thickness', 'SI')).toEqual({ ok: true, value: 0.25 })
+  })
+
+  it('refuses a length unit in a box that is not a length', () => {
+    const r = parseDisplayInput('3 m', 'Mass', 'mass', 'SI')
+    expect(r.ok).toBe(false)
+    if (!r.ok) expect(r.message).toMatch(/^Mass: a length unit \(m\) does not fit here/)
+  })
+})
+
+describe('implausibility', () => {
+  it('warns of a 0.25 mm wall and accepts a 250 mm one', () => {
+    // Usual wall thicknesses 50 mm to 3 m: common practice.
+    expect(implausibility(0.00025, 'thickness', 'SI')).toMatch(/^0\.250 mm is unusual for a wall thickness/)
+    expect(implausibility(0.25, 'thickness', 'SI')).toBeNull()
+    expect(implausibility(5000, 'length', 'SI')).toMatch(/unusual for a length/)
+    expect(implausibility(1e6, 'mass', 'SI')).toBeNull()
   })
 })

@@ -31,7 +31,7 @@ export function addFrameLine(doc: Project, args: AddFrameLineArgs): CommandOutco
   if (c) return refuse(c)
   const range = pickRange(doc, args.base, args.top)
   if ('message' in range) return refuse(range.message)
-  const name = args.name ?? nextName('Frame', doc.frameLines)
+  const name = args.name ?? nextName('Frame line', doc.frameLines)
   const cn = checkName('name', name)
   if (cn) return refuse(cn)
   const id = (args.id ?? createId<FrameLineId>('f')) as FrameLineId

@@ -8,11 +8,10 @@
 import { useEffect, useRef, useState } from 'react'
 import { BALANCE_DEFAULTS, suggestBalance, suggestionApplies } from '@/engine'
 import type { BalanceMetrics, BalanceObjective, BalanceOptions, BalanceResult, BalanceSuggestion } from '@/engine'
-import { CAUTION, CAUTION_SHORT, formatNumber } from '@/model'
+import { formatNumber } from '@/model'
 import type { Project } from '@/model'
 import { BalanceCancelled, createBalanceRunner, createBalanceWorker } from './balanceRunner'
 import type { BalanceRunner } from './balanceRunner'
-import { CautionNote } from './CautionNote'
 
 export interface BalancePanelProps {
   readonly project: Project
@@ -258,7 +257,6 @@ export function BalancePanelView(props: BalancePanelViewProps) {
           )}
         </>
       ) : null}
-      <CautionNote short={CAUTION_SHORT} full={result?.caution ?? CAUTION} testId="balance-caution" />
     </section>
   )
 }

@@ -4,9 +4,7 @@
  */
 import { useState } from 'react'
 import type { AnalysisResult, BalanceResult } from '@/engine'
-import { CAUTION, CAUTION_SHORT } from '@/model'
 import type { Project, UnitSystem } from '@/model'
-import { CautionNote } from './CautionNote'
 import { downloadFile, openAndPrint } from './download'
 import { csvFiles, reportFile } from './reportFiles'
 import type { DownloadFile } from './reportFiles'
@@ -100,7 +98,6 @@ export function ReportActions(props: ReportActionsProps) {
           {message}
         </p>
       ) : null}
-      <CautionNote short={CAUTION_SHORT} full={CAUTION} testId="report-caution" />
     </section>
   )
 }
