@@ -2,8 +2,10 @@ import { MODE_COLUMNS, modeHeaderLabel } from '@/model'
 import type { Floor, UnitSystem } from '@/model'
 import { scopeLine } from '@/engine'
 import type { AnalysisResult } from '@/engine'
+import { designBaseShearTable, designDetailTables } from '@/report'
 import { characterWords } from '@/viewer'
 import { formatNumber, formatQuantity } from './quantities'
+import { ResultTableView } from './ResultTableView'
 import { resultsSummary } from './resultsSummary'
 import type { ResultsSummary } from './resultsSummary'
 
@@ -43,6 +45,7 @@ export function ResultsPanel({ floors, result, isStale, units }: Props) {
         </p>
       ) : null}
       {result ? <SummaryView summary={summary} units={units} /> : null}
+      {result?.design ? <DesignView result={result} units={units} /> : null}
       {result ? (
         <details className="results-details" data-testid="results-details">
           <summary>All modes, torsion checks and plan regularity</summary>
@@ -212,6 +215,29 @@ function SummaryView({ summary, units }: { summary: ResultsSummary; units: UnitS
       ) : (
         <p className="muted">No story drift ratios in this result.</p>
       )}
+    </div>
+  )
+}
+
+/**
+ * Design-level numbers when the project has a seismic system (settings.seismicDesign): the base shear
+ * per direction (period used and why, Cs or Sd, V) first, the design drifts, stability, amplified
+ * torsion, spectrum scaling and storey checks in a section that opens on request.
+ */
+function DesignView({ result, units }: { result: AnalysisResult; units: UnitSystem }) {
+  const base = designBaseShearTable(result, units)
+  const details = designDetailTables(result, units)
+  return (
+    <div className="design-view" data-testid="design-view">
+      {base ? <ResultTableView table={base} /> : null}
+      {details.length > 0 ? (
+        <details data-testid="design-details">
+          <summary>Design drifts, stability and storey checks</summary>
+          {details.map((t) => (
+            <ResultTableView key={t.id} table={t} />
+          ))}
+        </details>
+      ) : null}
     </div>
   )
 }
