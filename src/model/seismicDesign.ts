@@ -159,6 +159,8 @@ export function readSeismicDesign(v: unknown, path: string, out: SeismicReadMess
   }
   const optNum = (p: string, x: unknown, lo: number, hi: number): number | undefined =>
     x === undefined ? undefined : num(p, x, lo, hi)
+  const optNumClosed = (p: string, x: unknown, lo: number, hi: number): number | undefined =>
+    x === undefined ? undefined : num(p, x, lo, hi, false)
   const pick = <T extends string>(p: string, x: unknown, options: readonly T[], optional: boolean): T | undefined => {
     if (x === undefined && optional) return undefined
     if (typeof x === 'string' && (options as readonly string[]).includes(x)) return x as T
@@ -181,9 +183,11 @@ export function readSeismicDesign(v: unknown, path: string, out: SeismicReadMess
       fields(p, x, ['preset', 'R', 'Cd', 'Omega0', 'Ct', 'x'])
       const s = {
         preset: preset(`${p}.preset`, x.preset),
-        R: num(`${p}.R`, x.R, 0, 20),
-        Cd: num(`${p}.Cd`, x.Cd, 0, 20),
-        Omega0: num(`${p}.Omega0`, x.Omega0, 0, 10),
+        // Factors below 1 do not occur in ASCE/SEI 7-16 Table 12.2-1 (common practice reading); a tiny
+        // R would make Cs = SDS/(R/Ie) overflow, so the range starts at 1 (found by the fuzz test).
+        R: num(`${p}.R`, x.R, 1, 20, false),
+        Cd: num(`${p}.Cd`, x.Cd, 1, 20, false),
+        Omega0: num(`${p}.Omega0`, x.Omega0, 1, 10, false),
         Ct: num(`${p}.Ct`, x.Ct, 0, 1),
         x: num(`${p}.x`, x.x, 0, 2),
       }
@@ -192,7 +196,8 @@ export function readSeismicDesign(v: unknown, path: string, out: SeismicReadMess
       return { ...(pr !== undefined ? { preset: pr } : {}), ...(rest as Omit<Asce7System, 'preset'>) }
     }
     const riskCategory = pick(`${path}.riskCategory`, v.riskCategory, categories, false)
-    const Ie = optNum(`${path}.Ie`, v.Ie, 0, 3)
+    // Table 1.5-2 gives Ie of 1.0 to 1.5; below 1 the design drifts Cd δe/Ie would grow without bound.
+    const Ie = optNumClosed(`${path}.Ie`, v.Ie, 1, 3)
     const designCategory = pick(`${path}.designCategory`, v.designCategory, ['A', 'B', 'C', 'D', 'E', 'F'] as const, true)
     const driftRow = pick(`${path}.driftRow`, v.driftRow, ['other', 'low-rise', 'masonry-cantilever', 'masonry-other'] as const, true)
     const stabilityBeta = optNum(`${path}.stabilityBeta`, v.stabilityBeta, 0, 1)

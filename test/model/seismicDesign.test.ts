@@ -46,13 +46,23 @@ describe('settings.seismicDesign', () => {
     expect(r.project.settings.spectrum).toEqual({ kind: 'asce7', SDS: 1, SD1: 0.6, TL: 8, S1: 0.7 })
   })
 
+  it('refuses an R of 6e-300 that made the design base shear overflow (found by the fuzz test)', () => {
+    // Cs = SDS / (R / Ie): a vanishing R gave an infinite floor force and NaN drifts with status ok.
+    const r = parseProject(withSettings({ seismicDesign: { ...asce, systemY: { ...asce.systemY, R: 6e-300 } } }))
+    expect(r.ok).toBe(false)
+    if (r.ok) return
+    expect(r.errors).toContain('settings.seismicDesign.systemY.R: must be >= 1, got 6e-300')
+    const ie = parseProject(withSettings({ seismicDesign: { ...asce, Ie: 1e-9 } }))
+    expect(ie.ok).toBe(false)
+  })
+
   it('names the field and the problem when a value is wrong, and refuses the file', () => {
     const bad = { ...asce, riskCategory: 'V', systemY: { ...asce.systemY, Cd: -1 } }
     const r = parseProject(withSettings({ seismicDesign: bad }))
     expect(r.ok).toBe(false)
     if (r.ok) return
     expect(r.errors).toContain('settings.seismicDesign.riskCategory: must be one of "I", "II", "III", "IV", got "V"')
-    expect(r.errors).toContain('settings.seismicDesign.systemY.Cd: must be > 0, got -1')
+    expect(r.errors).toContain('settings.seismicDesign.systemY.Cd: must be >= 1, got -1')
     const noSystem = parseProject(withSettings({ seismicDesign: { code: 'en1998-1', importanceClass: 'I', systemX: { q: 0.5 } } }))
     expect(noSystem.ok).toBe(false)
     if (noSystem.ok) return

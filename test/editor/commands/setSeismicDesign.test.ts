@@ -27,7 +27,7 @@ describe('setAnalysisSettings with a seismic system', () => {
       store,
       'setAnalysisSettings',
       { patch: { seismicDesign: { ...design, systemX: { ...design.systemX, R: 0 } } } },
-      'settings.seismicDesign.systemX.R: must be > 0, got 0',
+      'settings.seismicDesign.systemX.R: must be >= 1, got 0',
     )
     checkRefused(store, 'setAnalysisSettings', { patch: { torsionalFlexibilityLimit: 0 } }, 'settings.torsionalFlexibilityLimit: must be > 0')
   })
