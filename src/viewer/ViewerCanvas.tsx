@@ -16,14 +16,61 @@ import { SLAB_THICKNESS, shadeOf } from './buildingLayout'
 import { BuildingInstance } from './BuildingInstance'
 import { isSoftwareWebGL } from './ViewerErrorBoundary'
 import { presetView } from './cameraPresets'
+import { exportFov } from './exportMedia'
 import type { FloorMarks, SharedResources } from './BuildingInstance'
 import type { RigidTransform } from './modeAnimation'
 import type { MotionSource } from './motionSource'
 import { BASE_CYCLES_PER_SECOND } from './viewerStore'
 import type { AnimationClock, CameraPreset, ViewerStore } from './viewerStore'
 
+/** Renders the frame just drawn once more at another size, for exports. */
+export interface FrameGrab {
+  /**
+   * Render the current frame at `width` × `height` pixels (pixel ratio 1; the camera's field kept
+   * as exportFov says), hand the WebGL canvas to `draw` while it holds that picture, then put the
+   * canvas back to the pane's size and redraw it. The pane's CSS size never changes.
+   */
+  readonly renderAt: (width: number, height: number, draw: (canvas: HTMLCanvasElement) => void) => void
+}
+
 /** Called after every rendered frame with the WebGL canvas (exports composite it then). */
-export type FrameCapture = (canvas: HTMLCanvasElement) => void
+export type FrameCapture = (canvas: HTMLCanvasElement, grab: FrameGrab) => void
+
+/** FrameGrab.renderAt for one renderer, scene and camera. */
+function renderAtSize(
+  gl: THREE.WebGLRenderer,
+  scene: THREE.Scene,
+  camera: THREE.Camera,
+  width: number,
+  height: number,
+  draw: (canvas: HTMLCanvasElement) => void,
+): void {
+  const ratio = gl.getPixelRatio()
+  const size = gl.getSize(new THREE.Vector2())
+  const persp = camera instanceof THREE.PerspectiveCamera ? camera : null
+  const saved = persp ? { fov: persp.fov, aspect: persp.aspect } : null
+  try {
+    gl.setPixelRatio(1)
+    gl.setSize(width, height, false)
+    if (persp) {
+      const aspect = width / Math.max(1, height)
+      persp.fov = exportFov(persp.fov, persp.aspect, aspect)
+      persp.aspect = aspect
+      persp.updateProjectionMatrix()
+    }
+    gl.render(scene, camera)
+    draw(gl.domElement)
+  } finally {
+    gl.setPixelRatio(ratio)
+    gl.setSize(size.x, size.y, false)
+    if (persp && saved) {
+      persp.fov = saved.fov
+      persp.aspect = saved.aspect
+      persp.updateProjectionMatrix()
+    }
+    gl.render(scene, camera)
+  }
+}
 
 interface Props {
   readonly layout: BuildingLayout
@@ -209,7 +256,7 @@ function RenderStep(props: { capture: RefObject<FrameCapture | null>; onRendered
   const { capture, onRendered } = props
   useFrame(({ gl, scene, camera }) => {
     gl.render(scene, camera)
-    capture.current?.(gl.domElement)
+    capture.current?.(gl.domElement, { renderAt: (w, h, draw) => renderAtSize(gl, scene, camera, w, h, draw) })
     onRendered?.()
   }, 1)
   return null

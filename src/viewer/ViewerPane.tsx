@@ -10,13 +10,19 @@ import type { FloorMarks } from './BuildingInstance'
 import { legendTicks, rampGradient } from './colourScale'
 import type { ColourBy } from './colourScale'
 import {
+  EXPORT_SIZE_CHOICES,
   canEncodeVp8,
+  captionLayout,
+  createGifWriter,
   drawCaptioned,
   downloadBlob,
   encodeWebm,
   exportFileName,
+  exportPixels,
+  gifPixels,
   pickWebmType,
 } from './exportMedia'
+import type { Caption, ExportSizeChoice } from './exportMedia'
 import type { RigidTransform } from './modeAnimation'
 import { characterWords } from './modeMeaning'
 import { historyMotion, modeMotion, modeRows, resultFits, wallSegments } from './motionSource'
@@ -52,6 +58,8 @@ export interface ViewerPaneProps {
 const CYCLE_MODES = 6
 /** Seconds each mode stays on screen while cycling. */
 const CYCLE_SECONDS = 6
+/** Frames of the GIF export (one cycle). */
+const GIF_FRAMES = 24
 
 const pct = (v: number) => `${(v * 100).toFixed(1)}`
 
@@ -117,64 +125,81 @@ export function ViewerPane(props: ViewerPaneProps) {
     requestCamera(store, store.getState().cameraRequest.preset)
   }, [state.sideBySide, state.presenting, store])
 
-  const caption = useCallback(() => {
-    const title = motionA ? `${motionA.title} — ${project.name}` : project.name
-    const meaning = motionA?.meaning ?? 'Building at rest (no modal results).'
-    return { title, meaning, caution: CAUTION_SHORT }
-  }, [motionA, project.name])
+  /** Caption of an export `width` pixels wide: the full caution where it fits, else the short one. */
+  const caption = useCallback(
+    (width: number): Caption => {
+      const title = motionA ? `${motionA.title} — ${project.name}` : project.name
+      const meaning = motionA?.meaning ?? 'Building at rest (no modal results).'
+      return { title, meaning, caution: width >= 1200 ? CAUTION : CAUTION_SHORT }
+    },
+    [motionA, project.name],
+  )
 
-  const exportName = (ext: 'png' | 'webm') =>
+  const exportName = (ext: 'png' | 'webm' | 'gif') =>
     motionA?.kind === 'mode'
       ? exportFileName(project.name, motionA.mode + 1, ext)
       : exportFileName(project.name, motionA ? 'response' : 'building', ext)
 
+  /** Output canvas and 2D context for an export of the given size, or null with a message. */
+  const outputCanvas = (width: number, height: number, what: string) => {
+    const out = document.createElement('canvas')
+    out.width = width
+    out.height = height
+    const ctx = out.getContext('2d', { willReadFrequently: what === 'GIF' })
+    if (!ctx) setViewer(store, { message: `[viewer] ${what} export failed: no 2D canvas.` })
+    return ctx ? { out, ctx } : null
+  }
+
   const exportPng = () => {
     const name = exportName('png')
-    const cap = caption()
-    capture.current = (gl) => {
+    const choice = store.getState().exportSize
+    capture.current = (gl, grab) => {
       capture.current = null
-      const out = document.createElement('canvas')
-      out.width = gl.width
-      out.height = gl.height
-      const ctx = out.getContext('2d')
-      if (!ctx) {
-        setViewer(store, { message: '[viewer] PNG export failed: no 2D canvas.' })
-        return
-      }
-      drawCaptioned(ctx, gl, out.width, out.height, cap)
-      out.toBlob((blob) => {
+      const { width, height } = exportPixels(choice, gl.width, gl.height)
+      const made = outputCanvas(width, height, 'PNG')
+      if (!made) return
+      const cap = caption(width)
+      grab.renderAt(width, captionLayout(width, height).scene.height, (frame) =>
+        drawCaptioned(made.ctx, frame, width, height, cap),
+      )
+      made.out.toBlob((blob) => {
         if (!blob) {
           setViewer(store, { message: '[viewer] PNG export failed.' })
           return
         }
         downloadBlob(blob, name)
-        setViewer(store, { message: `Saved ${name}` })
+        setViewer(store, { message: `Saved ${name} (${width} × ${height})` })
       }, 'image/png')
     }
     setViewer(store, { message: 'Preparing PNG…' })
   }
 
-  const exportWebm = async () => {
+  /** The running 3D canvas and r3f root, or null with a message. */
+  const running = () => {
     const glCanvas = rootRef.current?.querySelector('canvas')
     const root = rootState.current
     if (!glCanvas || !root) {
       setViewer(store, { message: '[viewer] Nothing to record: the 3D view is not running.' })
-      return
+      return null
     }
+    return { glCanvas, root }
+  }
+
+  const exportWebm = async () => {
+    const live = running()
+    if (!live) return
+    const { glCanvas, root } = live
     const name = exportName('webm')
-    const cap = caption()
-    // VP8 wants even frame sizes.
-    const w = glCanvas.width - (glCanvas.width % 2)
-    const h = glCanvas.height - (glCanvas.height % 2)
-    const out = document.createElement('canvas')
-    out.width = w
-    out.height = h
-    const ctx = out.getContext('2d')
-    if (!ctx) return
+    const { width: w, height: h } = exportPixels(store.getState().exportSize, glCanvas.width, glCanvas.height)
+    const made = outputCanvas(w, h, 'WebM')
+    if (!made) return
+    const { out, ctx } = made
+    const cap = caption(w)
+    const sceneHeight = captionLayout(w, h).scene.height
     const speed = store.getState().speed
     const saved = { phase: clock.phase, time: clock.time }
     setViewer(store, { recording: true, message: `Recording ${name}…` })
-    capture.current = (gl) => drawCaptioned(ctx, gl, w, h, cap)
+    capture.current = (_gl, grab) => grab.renderAt(w, sceneHeight, (frame) => drawCaptioned(ctx, frame, w, h, cap))
     try {
       if (await canEncodeVp8(w, h)) {
         const fps = 30
@@ -192,12 +217,58 @@ export function ViewerPane(props: ViewerPaneProps) {
           advance(performance.now(), true, root)
         })
         downloadBlob(blob, name)
-        setViewer(store, { message: `Saved ${name}` })
+        setViewer(store, { message: `Saved ${name} (${w} × ${h})` })
       } else {
         await recordRealTime(out, name, speed)
       }
     } catch (e) {
       setViewer(store, { message: `[viewer] WebM export failed: ${e instanceof Error ? e.message : String(e)}` })
+    } finally {
+      clock.held = false
+      clock.phase = saved.phase
+      clock.time = saved.time
+      capture.current = null
+      setViewer(store, { recording: false })
+    }
+  }
+
+  /** One cycle of the shown motion as a looping GIF (GIF_FRAMES frames, at most 960 × 540). */
+  const exportGif = async () => {
+    const live = running()
+    if (!live) return
+    const { glCanvas, root } = live
+    const name = exportName('gif')
+    const { width: w, height: h } = gifPixels(store.getState().exportSize, glCanvas.width, glCanvas.height)
+    const made = outputCanvas(w, h, 'GIF')
+    if (!made) return
+    const { ctx } = made
+    const cap = caption(w)
+    const sceneHeight = captionLayout(w, h).scene.height
+    const speed = store.getState().speed
+    const history = motionA?.kind === 'history' ? motionA.history : null
+    // Modes: one cycle at the on-screen speed; a time history: its first seconds (at most 8 s).
+    const seconds = history
+      ? Math.min(8, (history.dt * history.stepCount) / speed)
+      : 1 / (BASE_CYCLES_PER_SECOND * speed)
+    const saved = { phase: clock.phase, time: clock.time }
+    setViewer(store, { recording: true, message: `Writing ${name}…` })
+    capture.current = (_gl, grab) => grab.renderAt(w, sceneHeight, (frame) => drawCaptioned(ctx, frame, w, h, cap))
+    try {
+      const gif = await createGifWriter(w, h, (seconds * 1000) / GIF_FRAMES)
+      clock.held = true
+      for (let k = 0; k < GIF_FRAMES; k++) {
+        clock.phase = (2 * Math.PI * k) / GIF_FRAMES
+        clock.time = (k / GIF_FRAMES) * seconds * speed
+        advance(performance.now(), true, root)
+        gif.add(ctx.getImageData(0, 0, w, h).data)
+        // Let the page breathe between frames (quantising a frame takes a while).
+        await new Promise((r) => window.setTimeout(r, 0))
+      }
+      const bytes = gif.finish()
+      downloadBlob(new Blob([bytes as Uint8Array<ArrayBuffer>], { type: 'image/gif' }), name)
+      setViewer(store, { message: `Saved ${name} (${w} × ${h}, ${GIF_FRAMES} frames)` })
+    } catch (e) {
+      setViewer(store, { message: `[viewer] GIF export failed: ${e instanceof Error ? e.message : String(e)}` })
     } finally {
       clock.held = false
       clock.phase = saved.phase
@@ -281,9 +352,17 @@ export function ViewerPane(props: ViewerPaneProps) {
         onPeak={peak}
         onPng={exportPng}
         onWebm={() => void exportWebm()}
+        onGif={() => void exportGif()}
       />
       {state.presenting && (
-        <PresentationBar store={store} state={state} rows={rows.length} />
+        <PresentationBar
+          store={store}
+          state={state}
+          rows={rows.length}
+          onPng={exportPng}
+          onWebm={() => void exportWebm()}
+          onGif={() => void exportGif()}
+        />
       )}
       <div className="gyre-viewer-stage">
         {/* The legend and plan trace sit beside the canvas, never over the building. */}
@@ -388,8 +467,9 @@ function Toolbar(props: {
   onPeak: () => void
   onPng: () => void
   onWebm: () => void
+  onGif: () => void
 }) {
-  const { store, state, hasHistory, floorNames, onStep, onPeak, onPng, onWebm } = props
+  const { store, state, hasHistory, floorNames, onStep, onPeak, onPng, onWebm, onGif } = props
   const cam = (preset: CameraPreset, label: string, id: string) => (
     <button type="button" data-testid={`viewer-camera-${id}`} onClick={() => requestCamera(store, preset)}>
       {label}
@@ -494,12 +574,7 @@ function Toolbar(props: {
           </button>
         </fieldset>
         <fieldset aria-label="Export and present">
-          <button type="button" data-testid="viewer-export-png" onClick={onPng}>
-            PNG
-          </button>
-          <button type="button" data-testid="viewer-export-webm" onClick={onWebm} disabled={state.recording}>
-            {state.recording ? 'Recording…' : 'WebM'}
-          </button>
+          <ExportButtons store={store} state={state} idPrefix="viewer" onPng={onPng} onWebm={onWebm} onGif={onGif} />
           <button type="button" data-testid="viewer-present" onClick={() => setViewer(store, { presenting: true })}>
             Present
           </button>
@@ -524,8 +599,54 @@ function Toggle(props: {
   )
 }
 
-function PresentationBar(props: { store: ViewerStore; state: ViewerState; rows: number }) {
-  const { store, state, rows } = props
+/** Export size menu and the PNG / WebM / GIF buttons (toolbar and presentation bar). */
+function ExportButtons(props: {
+  store: ViewerStore
+  state: ViewerState
+  idPrefix: 'viewer' | 'presentation'
+  onPng: () => void
+  onWebm: () => void
+  onGif: () => void
+}) {
+  const { store, state, idPrefix, onPng, onWebm, onGif } = props
+  return (
+    <>
+      <label title="Pixel size of exported pictures and videos (GIF: at most 960 × 540)">
+        Size
+        <select
+          data-testid={`${idPrefix}-export-size`}
+          value={state.exportSize}
+          onChange={(e) => setViewer(store, { exportSize: e.target.value as ExportSizeChoice })}
+        >
+          {EXPORT_SIZE_CHOICES.map((c) => (
+            <option key={c.value} value={c.value}>
+              {c.label}
+            </option>
+          ))}
+        </select>
+      </label>
+      <button type="button" data-testid={`${idPrefix}-export-png`} onClick={onPng} disabled={state.recording}>
+        PNG
+      </button>
+      <button type="button" data-testid={`${idPrefix}-export-webm`} onClick={onWebm} disabled={state.recording}>
+        {state.recording ? 'Working…' : 'WebM'}
+      </button>
+      <button type="button" data-testid={`${idPrefix}-export-gif`} onClick={onGif} disabled={state.recording}>
+        GIF
+      </button>
+    </>
+  )
+}
+
+function PresentationBar(props: {
+  store: ViewerStore
+  state: ViewerState
+  rows: number
+  onPng: () => void
+  onWebm: () => void
+  onGif: () => void
+}) {
+  const { store, state, rows, onPng, onWebm, onGif } = props
   return (
     <div className="gyre-viewer-bar" aria-label="Presentation controls">
       <button type="button" data-testid="presentation-prev" onClick={() => selectMode(store, Math.max(0, state.mode - 1))}>
@@ -570,6 +691,7 @@ function PresentationBar(props: { store: ViewerStore; state: ViewerState; rows: 
           </select>
         </label>
       )}
+      <ExportButtons store={store} state={state} idPrefix="presentation" onPng={onPng} onWebm={onWebm} onGif={onGif} />
       <button
         type="button"
         data-testid="presentation-close"

@@ -6,6 +6,7 @@
 import { createStore } from 'zustand/vanilla'
 import type { StoreApi } from 'zustand/vanilla'
 import type { ColourBy } from './colourScale'
+import type { ExportSizeChoice } from './exportMedia'
 
 export type CameraPreset = 'top' | 'front' | 'side' | 'three-quarter'
 export type MotionSourceKind = 'mode' | 'history'
@@ -32,6 +33,8 @@ export interface ViewerState {
   readonly traceFloor: number | null
   readonly cameraRequest: { readonly preset: CameraPreset; readonly nonce: number }
   readonly recording: boolean
+  /** Output size of the PNG, WebM and GIF exports (GIF scaled down to at most 960 × 540). */
+  readonly exportSize: ExportSizeChoice
   /** Last export or viewer message for the status line. */
   readonly message: string
 }
@@ -61,6 +64,7 @@ export function createViewerStore(initial: Partial<ViewerState> = {}): ViewerSto
     traceFloor: null,
     cameraRequest: { preset: 'three-quarter', nonce: 0 },
     recording: false,
+    exportSize: '1920x1080',
     message: '',
     ...initial,
   }))

@@ -47,7 +47,7 @@ describe('balance assistant panel', () => {
 })
 
 describe('report actions', () => {
-  it('downloads the printable report with the caution, and the tables as CSV', async () => {
+  it('downloads the printable report with the caution, and all tables as CSV in one zip', async () => {
     const { page, errors, context } = await session.newPage()
     await openApp(page, session.url)
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('report-download').click()])
@@ -57,13 +57,18 @@ describe('report actions', () => {
     const html = readFileSync(path, 'utf8')
     expect(html).toContain('licensed structural engineer')
     expect(html).toContain('Corner Block, Quarry Street')
-    const csv = page.waitForEvent('download')
-    await page.getByTestId('csv-download').click()
-    const first = await csv
-    expect(first.suggestedFilename()).toMatch(/\.csv$/)
-    const text = readFileSync(await first.path(), 'utf8')
+    const [zipped] = await Promise.all([page.waitForEvent('download'), page.getByTestId('csv-download').click()])
+    expect(zipped.suggestedFilename()).toBe('corner-block-quarry-street-tables.zip')
+    // Unzipped with fflate (general-purpose reference library): README with the caution, then CSVs.
+    const { strFromU8, unzipSync } = await import('fflate')
+    const entries = unzipSync(new Uint8Array(readFileSync(await zipped.path())))
+    expect(strFromU8(entries['README.txt'] as Uint8Array)).toContain('licensed structural engineer')
+    const csvNames = Object.keys(entries).filter((n) => n.endsWith('.csv'))
+    expect(csvNames).toContain('corner-block-quarry-street-modes.csv')
+    const text = strFromU8(entries['corner-block-quarry-street-floors.csv'] as Uint8Array)
     // One quoted comment field: the demo's name holds a comma (docs/reports.md, CSV format).
     expect(text.split('\r\n')[0]).toMatch(/^"# Corner Block, Quarry Street \| .*licensed structural engineer.*"$/)
+    await expect(page.getByTestId('report-message').textContent()).resolves.toContain('tables.zip')
     expect(errors).toEqual([])
     await context.close()
   })

@@ -7,7 +7,9 @@ import { readFileSync } from 'node:fs'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Page } from 'playwright-core'
 import { CAUTION } from '@/model'
-import { contentShare, decodePng, differenceShare, hasPngSignature } from '../viewer/pngDecode'
+import { BAND_COLOUR, captionLayout } from '@/viewer/exportMedia'
+import { colourShare, contentShare, crop, decodePng, differenceShare, hasPngSignature } from '../viewer/pngDecode'
+import { readGif } from '../viewer/gifRead'
 import type { DecodedPng } from '../viewer/pngDecode'
 import { startViewerPage } from '../viewer/pageServer'
 import { startBrowserSession } from './harness'
@@ -107,33 +109,65 @@ describe('3D view', () => {
     await close()
   })
 
-  it('exports a PNG named after project and mode with real content', async () => {
+  it('exports a 1920 × 1080 PNG from a smaller pane with the caption in a band below the building', async () => {
     const { page, close } = await openApp()
     await page.click('[data-testid=mode-row-2]')
+    const paneSize = () =>
+      page.evaluate((sel) => {
+        const c = document.querySelector(sel) as HTMLCanvasElement
+        return { w: c.width, h: c.height }
+      }, CANVAS)
+    const before = await paneSize()
+    expect(before.w).toBeLessThan(1920)
+    await page.selectOption('[data-testid=viewer-export-size]', '1920x1080')
     const [download] = await Promise.all([
       page.waitForEvent('download', { timeout: 20000 }),
       page.click('[data-testid=viewer-export-png]'),
     ])
     expect(download.suggestedFilename()).toBe('corner-block-quarry-street_mode-2.png')
-    const path = await download.path()
-    const bytes = new Uint8Array(readFileSync(path))
-    // PNG specification §5.2 signature, then IHDR with the canvas's pixel size.
+    const bytes = new Uint8Array(readFileSync(await download.path()))
+    // PNG specification §5.2 signature, then IHDR (§11.2.2) with the chosen size, not the pane's.
     expect(hasPngSignature(bytes)).toBe(true)
     const img = decodePng(bytes)
-    const size = await page.evaluate((sel) => {
-      const c = document.querySelector(sel) as HTMLCanvasElement
-      return { w: c.width, h: c.height }
-    }, CANVAS)
-    expect(img.width).toBe(size.w)
-    expect(img.height).toBe(size.h)
-    expect(contentShare(img)).toBeGreaterThan(0.05)
+    expect([img.width, img.height]).toEqual([1920, 1080])
+    const { scene, band } = captionLayout(1920, 1080)
+    const bandPixels = crop(img, band)
+    const scenePixels = crop(img, scene)
+    // The band is mostly its own colour and holds text (caption lines: other pixels).
+    expect(colourShare(bandPixels, BAND_COLOUR)).toBeGreaterThan(0.5)
+    expect(contentShare(bandPixels)).toBeGreaterThan(0.01)
+    // The building area holds the building and no band colour at all: the caption covers nothing.
+    expect(contentShare(scenePixels)).toBeGreaterThan(0.03)
+    expect(colourShare(scenePixels, BAND_COLOUR, 3)).toBeLessThan(0.002)
+    // The pane's canvas is back at its own size after the export.
+    await expect.poll(paneSize).toEqual(before)
     await close()
   })
 
-  it('records a short WebM named after project and mode', async () => {
+  it('exports a looping GIF of the mode from presentation mode, scaled to fit 960 × 540', async () => {
     const { page, close } = await openApp()
+    await page.click('[data-testid=viewer-present]')
+    await page.selectOption('[data-testid=presentation-export-size]', '1280x720')
     const [download] = await Promise.all([
-      page.waitForEvent('download', { timeout: 30000 }),
+      page.waitForEvent('download', { timeout: 90000 }),
+      page.click('[data-testid=presentation-export-gif]'),
+    ])
+    expect(download.suggestedFilename()).toBe('corner-block-quarry-street_mode-1.gif')
+    const info = readGif(new Uint8Array(readFileSync(await download.path())))
+    // GIF89a specification §17-§18: signature and logical screen size; one image block per frame.
+    expect(info.signature).toBe('GIF89a')
+    expect([info.width, info.height]).toEqual([960, 540])
+    expect(info.frames).toBe(24)
+    expect(info.loops).toBe(true)
+    await expect.poll(() => page.textContent('[data-testid=viewer-status]')).toContain('Saved corner-block-quarry-street_mode-1.gif')
+    await close()
+  })
+
+  it('records a short WebM named after project and mode at the chosen size', async () => {
+    const { page, close } = await openApp()
+    await page.selectOption('[data-testid=viewer-export-size]', '1280x720')
+    const [download] = await Promise.all([
+      page.waitForEvent('download', { timeout: 150000 }),
       page.click('[data-testid=viewer-export-webm]'),
     ])
     expect(download.suggestedFilename()).toBe('corner-block-quarry-street_mode-1.webm')
@@ -145,8 +179,13 @@ describe('3D view', () => {
     const ascii = Buffer.from(bytes).toString('latin1')
     expect(ascii).toContain('webm')
     expect(ascii).toContain('V_VP8')
+    // Video track size: PixelWidth (ID B0) 1280 = 05 00, PixelHeight (ID BA) 720 = 02 D0, each a
+    // two-byte unsigned integer with size byte 82 (RFC 9559 §5.1.4.1.28.6-7; EBML RFC 8794 §4).
+    const hex = Buffer.from(bytes).toString('hex')
+    expect(hex).toContain('b0820500')
+    expect(hex).toContain('ba8202d0')
     await close()
-  })
+  }, 200000)
 
   it('says why when WebGL is unavailable and keeps the rest of the app working', async () => {
     const { page, context, errors } = await session.newPage()

@@ -145,3 +145,29 @@ export function differenceShare(a: DecodedPng, b: DecodedPng, tol = 8): number {
   }
   return differ / n
 }
+
+/** The pixels of `img` inside a rectangle (clipped to the image). */
+export function crop(img: DecodedPng, rect: { x: number; y: number; width: number; height: number }): DecodedPng {
+  const x0 = Math.max(0, rect.x)
+  const y0 = Math.max(0, rect.y)
+  const width = Math.max(0, Math.min(img.width, rect.x + rect.width) - x0)
+  const height = Math.max(0, Math.min(img.height, rect.y + rect.height) - y0)
+  const rgba = new Uint8Array(width * height * 4)
+  for (let y = 0; y < height; y++) {
+    const from = 4 * ((y0 + y) * img.width + x0)
+    rgba.set(img.rgba.subarray(from, from + 4 * width), 4 * y * width)
+  }
+  return { width, height, rgba }
+}
+
+/** Share of pixels within `tol` (every channel) of a CSS hex colour such as '#181e29'. */
+export function colourShare(img: DecodedPng, hex: string, tol = 6): number {
+  const v = parseInt(hex.slice(1), 16)
+  const rgb = [(v >> 16) & 255, (v >> 8) & 255, v & 255]
+  const n = img.width * img.height
+  let near = 0
+  for (let i = 0; i < n; i++) {
+    if (rgb.every((c, k) => Math.abs(img.rgba[4 * i + k]! - c) <= tol)) near++
+  }
+  return n === 0 ? 0 : near / n
+}

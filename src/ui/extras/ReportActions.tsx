@@ -1,13 +1,13 @@
 /**
  * Report buttons: a printable HTML report (open and print, or download) and the result tables as
- * CSV files. Everything comes in by props; the component touches no store.
+ * CSV files in one zip. Everything comes in by props; the component touches no store.
  */
 import { useState } from 'react'
 import type { AnalysisResult, BalanceResult } from '@/engine'
 import type { Project, UnitSystem } from '@/model'
 import { downloadFile, openAndPrint } from './download'
-import { csvFiles, reportFile } from './reportFiles'
-import type { DownloadFile } from './reportFiles'
+import { csvZipFile, reportFile } from './reportFiles'
+import type { DownloadFile, SavedFile } from './reportFiles'
 
 export interface ReportActionsProps {
   readonly project: Project
@@ -17,7 +17,7 @@ export interface ReportActionsProps {
   /** Balance suggestions to include in the report (optional). */
   readonly balance?: BalanceResult
   /** Overrides for tests or hosts: where files go and how the report is printed. */
-  readonly save?: (file: DownloadFile) => void
+  readonly save?: (file: SavedFile) => void
   readonly print?: (html: string) => void
   /** Clock for the report's time stamp (default: now). */
   readonly now?: () => Date
@@ -25,7 +25,7 @@ export interface ReportActionsProps {
 
 export function ReportActions(props: ReportActionsProps) {
   const { project, result, unitSystem, balance } = props
-  const save = props.save ?? ((file: DownloadFile) => downloadFile(file))
+  const save = props.save ?? ((file: SavedFile) => downloadFile(file))
   const print = props.print ?? ((html: string) => void openAndPrint(html))
   const now = props.now ?? (() => new Date())
   const [message, setMessage] = useState<string | null>(null)
@@ -83,13 +83,13 @@ export function ReportActions(props: ReportActionsProps) {
           onClick={() =>
             run('save the tables', () => {
               if (!result) return 'Nothing to export yet.'
-              const files = csvFiles(project, result, unitSystem)
-              for (const f of files) save(f)
-              return `Saved ${files.length} CSV file${files.length === 1 ? '' : 's'}.`
+              const file = csvZipFile(project, result, unitSystem, now())
+              save(file)
+              return `Saved ${file.fileName}.`
             })
           }
         >
-          Tables as CSV
+          All tables (.zip of CSV)
         </button>
       </div>
       {disabled ? <p className="gx-muted">Run an analysis to enable the report.</p> : null}

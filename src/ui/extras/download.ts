@@ -3,11 +3,12 @@
  * new window (or, when pop-ups are blocked, a hidden frame) to print it.
  */
 import { downloadBlob } from '@/viewer'
-import type { DownloadFile } from './reportFiles'
+import type { SavedFile } from './reportFiles'
 
-/** Save one file through a temporary object URL and an <a download> click. */
-export function downloadFile(file: DownloadFile): void {
-  downloadBlob(new Blob([file.text], { type: file.mime }), file.fileName)
+/** Save one text or binary file through a temporary object URL and an <a download> click. */
+export function downloadFile(file: SavedFile): void {
+  const body: BlobPart = 'text' in file ? file.text : (file.bytes as Uint8Array<ArrayBuffer>)
+  downloadBlob(new Blob([body], { type: file.mime }), file.fileName)
 }
 
 /**
