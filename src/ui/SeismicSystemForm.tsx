@@ -47,8 +47,8 @@ function defaultDesign(code: SeismicDesign['code']): SeismicDesign {
   return { code, importanceClass: 'II', systemX: system, systemY: system }
 }
 
-/** A number box that commits on Enter or blur; a refused value stays with the message. */
-function NumberBox(props: {
+/** A plain number box (no units) that commits on Enter or blur; a refused value stays with the message. */
+export function NumberBox(props: {
   readonly label: string
   readonly value: number
   readonly testId: string
@@ -96,7 +96,7 @@ function NumberBox(props: {
   )
 }
 
-function Choice<T extends string>(props: {
+export function Choice<T extends string>(props: {
   readonly label: string
   readonly value: T
   readonly options: readonly (readonly [T, string])[]
