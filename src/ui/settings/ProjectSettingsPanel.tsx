@@ -6,8 +6,8 @@
  * message and the model keeps its value. Snapping is an editor preference kept in localStorage.
  */
 import { useEffect, useState } from 'react'
-import { execute, setSnapping } from '@/editor'
-import type { EditorStore } from '@/editor'
+import { bail, execute, mark, setSnapping } from '@/editor'
+import type { CommandArgs, CommandName, EditorStore } from '@/editor'
 import { BUILT_IN_CRITERION_SETS } from '@/engine'
 import type { AnalysisSettings, Grid, SpectrumSpec, UnitSystem } from '@/model'
 import { NumberField } from '../NumberField'
@@ -86,6 +86,18 @@ function writeStoredSnap(p: SnapPreferences): void {
   }
 }
 
+/**
+ * Run one command as its own undo step (a mark before it, so it never merges with the previous
+ * change); a refusal removes the mark again. Returns the refusal message or null.
+ */
+function runStep<N extends CommandName>(store: EditorStore, label: string, name: N, args: CommandArgs<N>): string | null {
+  const id = mark(store, label)
+  const r = execute(store, name, args)
+  if (r.ok) return null
+  bail(store, id)
+  return r.message
+}
+
 /** The panel; reads the document and snap settings from the store and writes through commands. */
 export function ProjectSettingsPanel({ store, units }: ProjectSettingsPanelProps) {
   const name = useEditor(store, (s) => s.doc.name)
@@ -98,14 +110,12 @@ export function ProjectSettingsPanel({ store, units }: ProjectSettingsPanelProps
   }, [store])
 
   const settingsPatch = (patch: Partial<AnalysisSettings> | Record<string, undefined>): string | null => {
-    const r = execute(store, 'setAnalysisSettings', { patch: patch as Partial<AnalysisSettings> })
-    return r.ok ? null : r.message
+    return runStep(store, 'change settings', 'setAnalysisSettings', { patch: patch as Partial<AnalysisSettings> })
   }
   const [choiceMessage, setChoiceMessage] = useState<string | null>(null)
   const choose = (patch: Partial<AnalysisSettings> | Record<string, undefined>): void => setChoiceMessage(settingsPatch(patch))
   const setGrid = (g: Grid | undefined): string | null => {
-    const r = execute(store, 'setGrid', { grid: g })
-    return r.ok ? null : r.message
+    return runStep(store, 'change grid', 'setGrid', { grid: g })
   }
   const [gridMessage, setGridMessage] = useState<string | null>(null)
 
@@ -126,10 +136,7 @@ export function ProjectSettingsPanel({ store, units }: ProjectSettingsPanelProps
   return (
     <details className="gx-panel gx-seismic gx-settings" data-testid="project-settings">
       <summary>Project settings</summary>
-      <TextBox label="Project name" value={name} testId="settings-name" onCommit={(v) => {
-        const r = execute(store, 'renameProject', { name: v })
-        return r.ok ? null : r.message
-      }} />
+      <TextBox label="Project name" value={name} testId="settings-name" onCommit={(v) => runStep(store, 'rename project', 'renameProject', { name: v })} />
       <Choice label="Criterion set" value={settings.criterionSet} testId="settings-criterion-set" options={setOptions} onChange={(v) => choose({ criterionSet: v })} />
       <NumberBox
         label="Accidental eccentricity (fraction of plan width)"
