@@ -229,14 +229,16 @@ function GridAxisRows(props: {
       {lines.map((l, i) => (
         <div className="gx-settings-row" key={`${axis}-${i}`} data-testid={`settings-grid-${axis}-${i}`}>
           <TextBox label="Label" value={l.label} testId={`settings-grid-${axis}-${i}-label`} onCommit={(v) => onGrid(changeGridLine(grid, axis, i, { label: v }))} />
-          <NumberField
-            label={`${axis} of line ${l.label}`}
-            value={l.at}
-            kind="length"
-            units={units}
-            testId={`settings-grid-${axis}-${i}-at`}
-            onCommit={(v) => onGrid(changeGridLine(grid, axis, i, { at: v }))}
-          />
+          <div className="gx-settings-at">
+            <NumberField
+              label={`${axis} of line ${l.label}`}
+              value={l.at}
+              kind="length"
+              units={units}
+              testId={`settings-grid-${axis}-${i}-at`}
+              onCommit={(v) => onGrid(changeGridLine(grid, axis, i, { at: v }))}
+            />
+          </div>
           <button type="button" data-testid={`settings-grid-${axis}-${i}-remove`} aria-label={`Remove grid line ${l.label}`} onClick={() => onRemove(i)}>
             ×
           </button>
