@@ -228,10 +228,10 @@ function GridAxisRows(props: {
       <p className="gx-muted">{axis === 'x' ? 'Lines of constant x' : 'Lines of constant y'}</p>
       {lines.map((l, i) => (
         <div className="gx-settings-row" key={`${axis}-${i}`} data-testid={`settings-grid-${axis}-${i}`}>
-          <TextBox label="Label" value={l.label} testId={`settings-grid-${axis}-${i}-label`} onCommit={(v) => onGrid(changeGridLine(grid, axis, i, { label: v }))} />
+          <TextBox label="Name" value={l.label} testId={`settings-grid-${axis}-${i}-label`} onCommit={(v) => onGrid(changeGridLine(grid, axis, i, { label: v }))} />
           <div className="gx-settings-at">
             <NumberField
-              label={`${axis} of line ${l.label}`}
+              label={`${axis} at`}
               value={l.at}
               kind="length"
               units={units}
@@ -239,7 +239,7 @@ function GridAxisRows(props: {
               onCommit={(v) => onGrid(changeGridLine(grid, axis, i, { at: v }))}
             />
           </div>
-          <button type="button" data-testid={`settings-grid-${axis}-${i}-remove`} aria-label={`Remove grid line ${l.label}`} onClick={() => onRemove(i)}>
+          <button type="button" data-testid={`settings-grid-${axis}-${i}-remove`} aria-label={`Remove grid line ${l.label}`} title={`Remove grid line ${l.label}`} onClick={() => onRemove(i)}>
             ×
           </button>
         </div>
