@@ -109,7 +109,7 @@ describe('project settings panel', () => {
     await context.close()
   })
 
-  it('refuses a bad damping and an empty name with the field named, and keeps the model', async () => {
+  it('refuses a bad damping, an empty name and removing a used material with the field named, and keeps the model', async () => {
     const { page, errors, context } = await session.newPage()
     await openApp(page, session.url)
     await page.click('[data-testid="project-settings"] > summary')
@@ -121,11 +121,23 @@ describe('project settings panel', () => {
     await expect(page.locator('[data-testid="project-settings"] [role="alert"]').allTextContents()).resolves.toEqual(
       expect.arrayContaining([expect.stringContaining('name: must be a non-empty name')]),
     )
+    // A material in use is not removed; the message names the elements that use it.
+    const materialCount = () =>
+      page.evaluate(() => Object.keys((window as unknown as { __gyre: { store: { getState(): { doc: { materials: object } } } } }).__gyre.store.getState().doc.materials).length)
+    const materials = await materialCount()
+    await page.locator('[data-testid^="settings-material-"][data-testid$="-remove"]').first().click()
+    await expect(page.locator('[data-testid="settings-materials"] [role="alert"]').textContent()).resolves.toMatch(/is used by \d+ element\(s\) \(/)
+    expect(await materialCount()).toBe(materials)
     const after = await snapshot(page)
     expect(after.damping).toBe(before.damping)
     expect(after.name).toBe(before.name)
     expect(after.revision).toBe(before.revision)
     expect(after.undos).toBe(before.undos)
+    // Adding a material is one undo step.
+    await page.click('[data-testid="settings-material-add"]')
+    expect(await materialCount()).toBe(materials + 1)
+    await page.keyboard.press('Control+z')
+    expect(await materialCount()).toBe(materials)
     expect(errors).toEqual([])
     await context.close()
   })

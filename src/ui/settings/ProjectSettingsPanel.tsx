@@ -9,7 +9,7 @@ import { useEffect, useState } from 'react'
 import { bail, execute, mark, setSnapping } from '@/editor'
 import type { CommandArgs, CommandName, EditorStore } from '@/editor'
 import { BUILT_IN_CRITERION_SETS } from '@/engine'
-import type { AnalysisSettings, Grid, SpectrumSpec, UnitSystem } from '@/model'
+import type { AnalysisSettings, Grid, Material, SpectrumSpec, UnitSystem } from '@/model'
 import { NumberField } from '../NumberField'
 import { Choice, NumberBox } from '../SeismicSystemForm'
 import { useEditor } from '../hooks/useEditor'
@@ -70,6 +70,9 @@ function TextBox(props: { readonly label: string; readonly value: string; readon
   )
 }
 
+/** Starting values of a new material, to overwrite (E 30 GPa, ν 0.2: a normal-weight concrete, from memory). */
+const NEW_MATERIAL = { E: 30e9, nu: 0.2 } as const
+
 function readStoredSnap(): Partial<SnapPreferences> {
   try {
     return parseStoredSnap(localStorage.getItem(SNAP_STORAGE_KEY))
@@ -104,6 +107,8 @@ export function ProjectSettingsPanel({ store, units }: ProjectSettingsPanelProps
   const settings = useEditor(store, (s) => s.doc.settings)
   const grid = useEditor(store, (s) => s.doc.grid)
   const snapping = useEditor(store, (s) => s.snapping)
+  const materials = useEditor(store, (s) => s.doc.materials)
+  const [materialMessage, setMaterialMessage] = useState<string | null>(null)
   useEffect(() => {
     const stored = readStoredSnap()
     if (Object.keys(stored).length > 0) setSnapping(store, stored)
@@ -192,6 +197,42 @@ export function ProjectSettingsPanel({ store, units }: ProjectSettingsPanelProps
           </button>
         </div>
         {gridMessage ? <p className="error" role="alert">{gridMessage}</p> : null}
+      </fieldset>
+      <fieldset className="gx-seismic-dir" data-testid="settings-materials">
+        <legend>Materials</legend>
+        {Object.values(materials).map((m: Material) => (
+          <div key={m.id} className="gx-settings-material" data-testid={`settings-material-${m.id}`}>
+            <TextBox label="Name" value={m.name} testId={`settings-material-${m.id}-name`} onCommit={(v) => runStep(store, 'rename material', 'updateMaterial', { id: m.id, patch: { name: v } })} />
+            <NumberField
+              label={`E of ${m.name}`}
+              value={m.E}
+              kind="modulus"
+              units={units}
+              testId={`settings-material-${m.id}-E`}
+              onCommit={(v) => runStep(store, 'change material', 'updateMaterial', { id: m.id, patch: { E: v } })}
+            />
+            <NumberBox label="ν" value={m.nu} testId={`settings-material-${m.id}-nu`} onCommit={(v) => runStep(store, 'change material', 'updateMaterial', { id: m.id, patch: { nu: v } })} />
+            <button
+              type="button"
+              data-testid={`settings-material-${m.id}-remove`}
+              onClick={() => setMaterialMessage(runStep(store, 'remove material', 'deleteElements', { ids: [m.id] }))}
+            >
+              Remove {m.name}
+            </button>
+          </div>
+        ))}
+        <button
+          type="button"
+          data-testid="settings-material-add"
+          onClick={() =>
+            setMaterialMessage(
+              runStep(store, 'add material', 'addMaterial', { name: `Material ${Object.keys(materials).length + 1}`, E: NEW_MATERIAL.E, nu: NEW_MATERIAL.nu }),
+            )
+          }
+        >
+          + material
+        </button>
+        {materialMessage ? <p className="error" role="alert">{materialMessage}</p> : null}
       </fieldset>
       <fieldset className="gx-seismic-dir" data-testid="settings-snap">
         <legend>Snapping (this browser)</legend>
