@@ -6,7 +6,7 @@
  * analysis has design numbers, the base shear per direction is shown with the caution.
  */
 import { useState } from 'react'
-import { execute } from '@/editor'
+import { bail, execute, mark } from '@/editor'
 import type { EditorStore } from '@/editor'
 import type { AnalysisResult } from '@/engine'
 import {
@@ -130,7 +130,10 @@ export function SeismicSystemForm({ store, result, units }: SeismicSystemFormPro
   const [message, setMessage] = useState<string | null>(null)
   // A number box shows its own refusal; choices show theirs below the form.
   const apply = (patch: Partial<AnalysisSettings> | { seismicDesign: undefined }, fromBox: boolean): string | null => {
+    // Its own undo step: a mark before the command (removed again when it is refused).
+    const id = mark(store, 'seismic system')
     const r = execute(store, 'setAnalysisSettings', { patch })
+    if (!r.ok) bail(store, id)
     const msg = r.ok ? null : r.message
     setMessage(fromBox ? null : msg)
     return msg

@@ -88,6 +88,8 @@ describe('project settings panel', () => {
     await page.keyboard.press('Control+Shift+z')
     expect((await snapshot(page)).gridX[0]?.at).toBe(1.25)
 
+    // Snapping is a browser preference, not a document change: it survives the reload too.
+    await page.uncheck('[data-testid="settings-snap-midpoints"]')
     await page.waitForFunction(() => document.querySelector('[data-testid="autosave-state"]')?.textContent?.startsWith('autosaved'))
     await page.reload()
     await page.waitForSelector('[data-testid="plan-canvas"]')
@@ -100,6 +102,12 @@ describe('project settings panel', () => {
     expect(reloaded.gridX[0]).toEqual({ label: 'G1', at: 1.25 })
     await page.click('[data-testid="project-settings"] > summary')
     await expect(page.inputValue('[data-testid="settings-name"]')).resolves.toBe('Quayside Tower B')
+    await expect(page.isChecked('[data-testid="settings-snap-midpoints"]')).resolves.toBe(false)
+    const midpoints = await page.evaluate(
+      () => (window as unknown as { __gyre: { store: { getState(): { snapping: { midpoints: boolean } } } } }).__gyre.store.getState().snapping.midpoints,
+    )
+    expect(midpoints).toBe(false)
+    await page.check('[data-testid="settings-snap-midpoints"]')
     await session.screenshot(page, 'project-settings')
 
     // Start from the demo again for the other tests.
