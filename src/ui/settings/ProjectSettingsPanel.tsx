@@ -130,7 +130,7 @@ export function ProjectSettingsPanel({ store, units }: ProjectSettingsPanelProps
     ...BUILT_IN_CRITERION_SETS.map((s) => [s.spec.id, s.spec.name] as const),
     ...ownSets.map((s) => [s.id, `${s.name} (this project)`] as const),
   ]
-  if (!setOptions.some(([id]) => id === settings.criterionSet)) setOptions.push([settings.criterionSet, `${settings.criterionSet} (unknown)`])
+  if (settings.criterionSet !== '' && !setOptions.some(([id]) => id === settings.criterionSet)) setOptions.push([settings.criterionSet, `${settings.criterionSet} (unknown)`])
 
   const snapPref = (patch: Partial<SnapPreferences>): void => {
     setSnapping(store, patch)
@@ -142,7 +142,7 @@ export function ProjectSettingsPanel({ store, units }: ProjectSettingsPanelProps
     <details className="gx-panel gx-seismic gx-settings" data-testid="project-settings">
       <summary>Project settings</summary>
       <TextBox label="Project name" value={name} testId="settings-name" onCommit={(v) => runStep(store, 'rename project', 'renameProject', { name: v })} />
-      <Choice label="Criterion set" value={settings.criterionSet} testId="settings-criterion-set" options={setOptions} onChange={(v) => choose({ criterionSet: v })} />
+      <Choice label="Criterion set" value={settings.criterionSet === '' ? 'none' : settings.criterionSet} testId="settings-criterion-set" options={setOptions} onChange={(v) => choose({ criterionSet: v })} />
       <NumberBox
         label="Accidental eccentricity (fraction of plan width)"
         value={settings.accidentalEccentricity}
