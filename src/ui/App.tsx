@@ -44,6 +44,7 @@ import { useAutosave } from './hooks/useAutosave'
 import { useEditor, useEditorPick } from './hooks/useEditor'
 import { ElementForcesPanel } from './ElementForcesPanel'
 import { SeismicSystemForm } from './SeismicSystemForm'
+import { ProjectSettingsPanel } from './settings'
 import { Inspector } from './Inspector'
 import type { InspectedKind } from './Inspector'
 import { PlanCanvas } from './PlanCanvas'
@@ -607,6 +608,9 @@ export function App({ store, analysis, startupNotice = null, viewerInitial, auto
             </ErrorBoundary>
             <ErrorBoundary name="Element forces">
               <ElementForcesPanel floors={doc.floors} result={viewerResult} selection={selection} units={units} isStale={viewerStale} />
+            </ErrorBoundary>
+            <ErrorBoundary name="Project settings">
+              <ProjectSettingsPanel store={store} units={units} />
             </ErrorBoundary>
             <ErrorBoundary name="Seismic system">
               <SeismicSystemForm store={store} result={viewerResult} units={units} />

@@ -6,7 +6,7 @@
  * analysis has design numbers, the base shear per direction is shown with the caution.
  */
 import { useState } from 'react'
-import { execute } from '@/editor'
+import { bail, execute, mark } from '@/editor'
 import type { EditorStore } from '@/editor'
 import type { AnalysisResult } from '@/engine'
 import {
@@ -47,8 +47,8 @@ function defaultDesign(code: SeismicDesign['code']): SeismicDesign {
   return { code, importanceClass: 'II', systemX: system, systemY: system }
 }
 
-/** A number box that commits on Enter or blur; a refused value stays with the message. */
-function NumberBox(props: {
+/** A plain number box (no units) that commits on Enter or blur; a refused value stays with the message. */
+export function NumberBox(props: {
   readonly label: string
   readonly value: number
   readonly testId: string
@@ -96,7 +96,7 @@ function NumberBox(props: {
   )
 }
 
-function Choice<T extends string>(props: {
+export function Choice<T extends string>(props: {
   readonly label: string
   readonly value: T
   readonly options: readonly (readonly [T, string])[]
@@ -130,7 +130,10 @@ export function SeismicSystemForm({ store, result, units }: SeismicSystemFormPro
   const [message, setMessage] = useState<string | null>(null)
   // A number box shows its own refusal; choices show theirs below the form.
   const apply = (patch: Partial<AnalysisSettings> | { seismicDesign: undefined }, fromBox: boolean): string | null => {
+    // Its own undo step: a mark before the command (removed again when it is refused).
+    const id = mark(store, 'seismic system')
     const r = execute(store, 'setAnalysisSettings', { patch })
+    if (!r.ok) bail(store, id)
     const msg = r.ok ? null : r.message
     setMessage(fromBox ? null : msg)
     return msg

@@ -20,6 +20,7 @@ import { removeFloor } from './removeFloor'
 import { removeOpening } from './removeOpening'
 import { removeSlabVertex } from './removeSlabVertex'
 import { renameFloor } from './renameFloor'
+import { renameProject } from './renameProject'
 import { rotateElements } from './rotateElements'
 import { setAnalysisSettings } from './setAnalysisSettings'
 import { setElementFloorRange } from './setElementFloorRange'
@@ -32,6 +33,7 @@ import { updateElements } from './updateElements'
 import { updateMaterial } from './updateMaterial'
 
 export const commands = {
+  renameProject,
   addFloor,
   removeFloor,
   duplicateFloor,

@@ -5,11 +5,11 @@ import type { Check, CommandOutcome } from './result'
 import { checkName, checkNonNegative, checkPositive, refuse } from './result'
 
 export interface SetAnalysisSettingsArgs {
-  /** Fields to change; `undefined` clears an optional field (baseShearTarget, groundMotion, criterionSets). */
+  /** Fields to change; `undefined` clears an optional field (baseShearTarget, spectrumModes, groundMotion, criterionSets ...). */
   readonly patch: Patch<AnalysisSettings>
 }
 
-const OPTIONAL = ['criterionSets', 'baseShearTarget', 'groundMotion', 'seismicDesign', 'torsionalFlexibilityLimit']
+const OPTIONAL = ['criterionSets', 'baseShearTarget', 'spectrumModes', 'groundMotion', 'seismicDesign', 'torsionalFlexibilityLimit']
 
 /** The loader's own check of settings.seismicDesign: the first path-naming error, if any. */
 function checkSeismicDesign(v: unknown): Check {
@@ -66,6 +66,9 @@ export function setAnalysisSettings(doc: Project, args: SetAnalysisSettingsArgs)
       ? undefined
       : `settings.directionCombination: must be "srss" or "100-30", got "${String(s.directionCombination)}"`) ??
     (s.baseShearTarget === undefined ? undefined : checkPositive('settings.baseShearTarget', s.baseShearTarget)) ??
+    (s.spectrumModes === undefined || s.spectrumModes === 'full-mass' || s.spectrumModes === 'ninety-percent'
+      ? undefined
+      : `settings.spectrumModes: must be "full-mass" or "ninety-percent", got "${String(s.spectrumModes)}"`) ??
     checkSpectrum(s.spectrum) ??
     (s.seismicDesign === undefined ? undefined : checkSeismicDesign(s.seismicDesign)) ??
     (s.torsionalFlexibilityLimit === undefined ? undefined : checkPositive('settings.torsionalFlexibilityLimit', s.torsionalFlexibilityLimit))

@@ -29,4 +29,25 @@ describe('setAnalysisSettings', () => {
     checkRefused(store, 'setAnalysisSettings', { patch: { colour: 1 } as never }, 'settings: unknown field "colour"')
     checkRefused(store, 'setAnalysisSettings', { patch: { damping: undefined } }, 'settings.damping: is required')
   })
+
+  it('sets and clears the spectrum modes rule when a known rule is given', () => {
+    const store = createTestEditor()
+    checkDoUndoRedo(store, 'setAnalysisSettings', { patch: { spectrumModes: 'ninety-percent' } }, (doc) => {
+      expect(doc.settings.spectrumModes).toBe('ninety-percent')
+    })
+    checkDoUndoRedo(store, 'setAnalysisSettings', { patch: { spectrumModes: undefined } }, (doc) => {
+      expect('spectrumModes' in doc.settings).toBe(false)
+    })
+    checkRefused(store, 'setAnalysisSettings', { patch: { spectrumModes: 'all' as never } }, 'settings.spectrumModes: must be "full-mass" or "ninety-percent"')
+  })
+
+  it('refuses a tabulated spectrum whose periods do not ascend', () => {
+    const store = createTestEditor()
+    checkRefused(
+      store,
+      'setAnalysisSettings',
+      { patch: { spectrum: { kind: 'table', points: [[0, 0.4], [0.5, 1], [0.5, 0.8]] } } },
+      'spectrum.points[2]: periods must ascend',
+    )
+  })
 })

@@ -1,0 +1,2 @@
+export { ProjectSettingsPanel } from './ProjectSettingsPanel'
+export type { ProjectSettingsPanelProps } from './ProjectSettingsPanel'
