@@ -15,6 +15,26 @@ export async function openApp(page: Page, url: string): Promise<void> {
   await page.goto(`${url}?still`)
   await page.waitForSelector('[data-testid="plan-canvas"]')
   await waitForCurrentAnalysis(page)
+  await waitForStablePlan(page)
+}
+
+/**
+ * Wait until the plan view stops moving: panes settle and the plan refits after the first results
+ * (the centres table beside the plan appears), which can land late on a loaded machine.
+ */
+export async function waitForStablePlan(page: Page, tries = 40): Promise<void> {
+  let last = ''
+  for (let i = 0; i < tries; i++) {
+    const now = await page.evaluate(() => {
+      const svg = document.querySelector('[data-testid="plan-canvas"]') as SVGSVGElement | null
+      if (!svg) return 'none'
+      const r = svg.getBoundingClientRect()
+      return [r.left, r.top, r.width, r.height, svg.dataset.scale, svg.dataset.cx, svg.dataset.cy].join(',')
+    })
+    if (now === last) return
+    last = now
+    await page.waitForTimeout(120)
+  }
 }
 
 /** Wait until the status line says the analysis is current (the latest revision has its answer). */
@@ -58,6 +78,7 @@ export async function dragPlan(
   steps = 10,
   onStep?: (i: number) => Promise<void>,
 ): Promise<void> {
+  await waitForStablePlan(page)
   const a = await planToPage(page, from)
   const b = await planToPage(page, to)
   await page.mouse.move(a.x, a.y)
