@@ -1,7 +1,7 @@
 import { MODE_COLUMNS, modeHeaderLabel } from '@/model'
 import type { Floor, UnitSystem } from '@/model'
 import { scopeLine } from '@/engine'
-import type { AnalysisResult } from '@/engine'
+import type { AnalysisResult, CheckRow } from '@/engine'
 import { designBaseShearTable, designDetailTables } from '@/report'
 import { characterWords } from '@/viewer'
 import { formatNumber, formatQuantity } from './quantities'
@@ -88,33 +88,7 @@ export function ResultsPanel({ floors, result, isStale, units }: Props) {
               <br />
               <small>Source: {criterion.source}</small>
             </caption>
-            <thead>
-              <tr>
-                <th>Floor</th>
-                <th>Case</th>
-                <th>Quantity</th>
-                <th>Value</th>
-                <th>Limit</th>
-                <th>Verdict</th>
-                <th>Clause</th>
-              </tr>
-            </thead>
-            <tbody>
-              {criterion.rows.map((row, i) => (
-                <tr key={i}>
-                  <td>{floorName(row.floorId)}</td>
-                  <td>{row.caseId}</td>
-                  <td>{row.quantity}</td>
-                  <td>{Number.isFinite(row.value) ? row.value.toFixed(3) : '—'}</td>
-                  <td>{Number.isFinite(row.limit) ? row.limit.toFixed(2) : '—'}</td>
-                  <td className={`verdict verdict-${row.verdict}`}>
-                    {row.verdict}
-                    {row.label ? ` (${row.label})` : ''}
-                  </td>
-                  <td>{row.clause}</td>
-                </tr>
-              ))}
-            </tbody>
+            <CheckRows rows={criterion.rows} floorName={floorName} second="Case" limitDigits={2} withLabel />
           </table>
         ) : null}
         {regularity && regularity.rows.length > 0 ? (
@@ -130,30 +104,7 @@ export function ResultsPanel({ floors, result, isStale, units }: Props) {
                 </>
               ) : null}
             </caption>
-            <thead>
-              <tr>
-                <th>Floor</th>
-                <th>Dir.</th>
-                <th>Quantity</th>
-                <th>Value</th>
-                <th>Limit</th>
-                <th>Verdict</th>
-                <th>Clause</th>
-              </tr>
-            </thead>
-            <tbody>
-              {regularity.rows.map((row, i) => (
-                <tr key={i}>
-                  <td>{floorName(row.floorId)}</td>
-                  <td>{row.caseId}</td>
-                  <td>{row.quantity}</td>
-                  <td>{Number.isFinite(row.value) ? row.value.toFixed(3) : '—'}</td>
-                  <td>{Number.isFinite(row.limit) ? row.limit.toFixed(3) : '—'}</td>
-                  <td className={`verdict verdict-${row.verdict}`}>{row.verdict}</td>
-                  <td>{row.clause}</td>
-                </tr>
-              ))}
-            </tbody>
+            <CheckRows rows={regularity.rows} floorName={floorName} second="Dir." limitDigits={3} withLabel={false} />
           </table>
         ) : null}
         </details>
@@ -239,5 +190,47 @@ function DesignView({ result, units }: { result: AnalysisResult; units: UnitSyst
         </details>
       ) : null}
     </div>
+  )
+}
+
+/** Header and rows of a check table (torsion checks or plan regularity): one layout for both. */
+function CheckRows(props: {
+  rows: readonly CheckRow[]
+  floorName: (id: string) => string
+  second: string
+  limitDigits: number
+  withLabel: boolean
+}) {
+  const { rows, floorName, second, limitDigits, withLabel } = props
+  return (
+    <>
+      <thead>
+        <tr>
+          <th>Floor</th>
+          <th>{second}</th>
+          <th>Quantity</th>
+          <th>Value</th>
+          <th>Limit</th>
+          <th>Verdict</th>
+          <th>Clause</th>
+        </tr>
+      </thead>
+      <tbody>
+        {rows.map((row, i) => (
+          <tr key={i}>
+            <td>{floorName(row.floorId)}</td>
+            <td>{row.caseId}</td>
+            <td>{row.quantity}</td>
+            <td>{Number.isFinite(row.value) ? row.value.toFixed(3) : '—'}</td>
+            <td>{Number.isFinite(row.limit) ? row.limit.toFixed(limitDigits) : '—'}</td>
+            <td className={`verdict verdict-${row.verdict}`}>
+              {row.verdict}
+              {withLabel && row.label ? ` (${row.label})` : ''}
+            </td>
+            <td>{row.clause}</td>
+          </tr>
+        ))}
+      </tbody>
+    </>
   )
 }
